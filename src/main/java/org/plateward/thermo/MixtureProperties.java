@@ -225,6 +225,37 @@ public final class MixtureProperties {
     return lambda;
   }
 
+  /**
+   * Mixture thermal conductivity by the same Wassiljewa–Mason–Saxena rule from pure-species
+   * values the caller already has (for callers that tabulate λ_i(T) and √μ_i(T)).
+   *
+   * @param moleFractions x_i per species index, length 7, non-negative
+   * @param pureConductivityWPerMK λ_i at the temperature, W/(m K), length 7
+   * @param sqrtViscosity √μ_i at the temperature, √(Pa s), length 7
+   * @return λ, W/(m K)
+   */
+  public static double thermalConductivityWPerMK(
+      double[] moleFractions, double[] pureConductivityWPerMK, double[] sqrtViscosity) {
+    double lambda = 0.0;
+    for (int i = 0; i < N; i++) {
+      double x = moleFractions[i];
+      if (x != 0.0) {
+        double sqrtMuI = sqrtViscosity[i];
+        double sum = 0.0;
+        int row = i * N;
+        for (int j = 0; j < N; j++) {
+          double xj = moleFractions[j];
+          if (xj != 0.0) {
+            double a = 1.0 + sqrtMuI / sqrtViscosity[j] * MASS_RATIO_QUARTER[row + j];
+            sum += xj * a * a * PHI_DENOM_INV[row + j];
+          }
+        }
+        lambda += x * pureConductivityWPerMK[i] / sum;
+      }
+    }
+    return lambda;
+  }
+
   /** Fills s[0..6] = μ_i, s[7..13] = √μ_i and optionally s[14..20] = λ_i for present species. */
   private static void fillPure(double[] x, double tempK, double[] s, boolean conductivity) {
     double xs = 0.0;
