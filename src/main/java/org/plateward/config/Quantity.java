@@ -27,25 +27,24 @@ public record Quantity(double valueSi, Dimension dimension, String text) {
    */
   public static Quantity parse(String text, Dimension dimension) {
     Matcher m = FORM.matcher(text);
+    String expected = "a unit of " + dimension.label() + " (" + dimension.unitList() + ")";
     if (!m.matches()) {
       throw new QuantityFormatException(
-          "expected a number and a " + dimension.label() + " unit (" + dimension.unitList()
-              + "), got \"" + text + "\"");
+          "expected a number followed by " + expected + ", got \"" + text + "\"");
     }
     double number = Double.parseDouble(m.group(1));
     String unitText = m.group(2);
     if (unitText.isEmpty()) {
-      throw new QuantityFormatException(
-          "has no unit; write it with a " + dimension.label() + " unit (" + dimension.unitList()
-              + "), got \"" + text + "\"");
+      throw new QuantityFormatException("has no unit: give " + expected + ", got \"" + text + "\"");
     }
     Dimension.UnitOfMeasure unit = dimension.find(unitText);
     if (unit == null) {
       List<Dimension> others = Dimension.accepting(unitText);
-      String hint = others.isEmpty() ? "unknown unit" : others.get(0).label() + " unit";
+      String what = others.isEmpty()
+          ? "\"" + unitText + "\" is not a known unit"
+          : "\"" + unitText + "\" is a unit of " + others.get(0).label();
       throw new QuantityFormatException(
-          "expected a " + dimension.label() + " (" + dimension.unitList() + "), got \"" + text
-              + "\" (" + hint + " \"" + unitText + "\")");
+          "wrong unit: expected " + expected + ", got \"" + text + "\" (" + what + ")");
     }
     return new Quantity(unit.toSi(number), dimension, text.strip());
   }

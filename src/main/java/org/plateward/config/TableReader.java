@@ -125,7 +125,7 @@ final class TableReader {
   private double quantityOf(JsonNode v, String field, int line, Dimension dim, Bound bound) {
     if (!v.isTextual()) {
       errors.add(line, field, "needs a unit: write it as text such as \"" + example(dim)
-          + "\" (" + dim.label() + " units: " + dim.unitList() + "), got " + v);
+          + "\" (units of " + dim.label() + ": " + dim.unitList() + "), got " + v);
       return Double.NaN;
     }
     Quantity q;

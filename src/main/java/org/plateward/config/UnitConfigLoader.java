@@ -115,8 +115,8 @@ public final class UnitConfigLoader {
     double xN2 = f.fraction("nitrogen");
     double sum = xCh4 + xH2 + xCo2 + xN2;
     if (!Double.isNaN(sum) && Math.abs(sum - 1.0) > FEED_SUM_TOLERANCE) {
-      errors.add(f.headerLine(), "feed_gas", "dry mole fractions must sum to 1 (within "
-          + FEED_SUM_TOLERANCE + "), got " + fmt(sum));
+      errors.add(f.headerLine(), "feed_gas", "dry mole fractions must sum to 1 (within 1e-6), got "
+          + fmt(sum) + " (methane + hydrogen + carbon_dioxide + nitrogen)");
     }
     f.finish();
 
