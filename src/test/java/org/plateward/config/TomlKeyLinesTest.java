@@ -88,7 +88,7 @@ class TomlKeyLinesTest {
 
   private static void collect(JsonNode n, String path, List<String> out) {
     if (n.isObject()) {
-      n.fields().forEachRemaining(e -> collect(e.getValue(), path.isEmpty() ? e.getKey() : path + "." + e.getKey(), out));
+      n.properties().forEach(e -> collect(e.getValue(), path.isEmpty() ? e.getKey() : path + "." + e.getKey(), out));
     } else if (n.isArray()) {
       for (int i = 0; i < n.size(); i++) {
         collect(n.get(i), path + "[" + i + "]", out);
