@@ -1,6 +1,9 @@
 package org.plateward.cli;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
+import org.plateward.config.ConfigError;
 import org.plateward.config.InvalidConfigException;
 import org.plateward.config.PlatewardConfig;
 import picocli.CommandLine.Option;
@@ -26,6 +29,10 @@ public final class ConfigOption {
    *     exits with code 2
    */
   public PlatewardConfig load() throws InvalidConfigException {
+    if (file.equals(PlatewardConfig.DEFAULT_FILE) && !Files.exists(file)) {
+      throw new InvalidConfigException(List.of(new ConfigError(file, 0, null,
+          "no such file (the default: run from the folder that holds config/, or give -c FILE)")));
+    }
     return PlatewardConfig.load(file);
   }
 }

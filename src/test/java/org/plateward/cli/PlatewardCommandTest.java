@@ -70,6 +70,15 @@ class PlatewardCommandTest {
   }
 
   @Test
+  void onlyTheDefaultFileGetsTheWorkingFolderHint() {
+    // the default path exists here (tests run in the project folder), so only the other
+    // branch can be exercised in-process: a named file gets the plain message
+    Run r = run("check", "-c", "config/none.toml");
+    assertThat(r.exit()).isEqualTo(2);
+    assertThat(r.err()).startsWith("config/none.toml: no such file" + System.lineSeparator());
+  }
+
+  @Test
   void badArgumentsAreBadInput() {
     assertThat(run("check", "--no-such-option").exit()).isEqualTo(2);
     assertThat(run("no-such-command").exit()).isEqualTo(2);
