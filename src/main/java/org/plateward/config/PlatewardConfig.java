@@ -1,0 +1,38 @@
+package org.plateward.config;
+
+import java.nio.file.Path;
+import org.plateward.reactor.UnitSpec;
+
+/**
+ * Everything read from one Plateward configuration file.
+ *
+ * <p>Each group of tables has its own reader; {@link #load} runs them all over the same parsed
+ * document and collects their problems together. To add a section (for example
+ * {@code [opcua]}): write a reader in the style of {@link UnitConfigLoader#read}, give this
+ * record a component for its result and call the reader in {@link #load}. Top-level tables
+ * that no reader owns yet are ignored, so a file may already carry sections that later
+ * versions read; unknown keys inside an owned table are errors.
+ *
+ * @param file the file as the user named it
+ * @param unit the reactor unit, SI
+ */
+public record PlatewardConfig(Path file, UnitSpec unit) {
+  /** The file every command reads unless told otherwise. */
+  public static final Path DEFAULT_FILE = Path.of("config", "plateward.toml");
+
+  /**
+   * Reads and checks a configuration file. Nothing is written.
+   *
+   * @param file the TOML file
+   * @return the configuration
+   * @throws InvalidConfigException with every problem found, each as file, line, field and
+   *     message
+   */
+  public static PlatewardConfig load(Path file) throws InvalidConfigException {
+    TomlDocument doc = TomlDocument.read(file);
+    ErrorList errors = new ErrorList(file);
+    UnitSpec unit = UnitConfigLoader.read(doc, errors);
+    errors.throwIfAny();
+    return new PlatewardConfig(file, unit);
+  }
+}
