@@ -308,6 +308,34 @@ public final class IdealGasThermo {
   }
 
   /**
+   * Standard Gibbs energies g° = h − T s° of all species at one temperature, into a
+   * caller-owned array; the powers and logarithm of T are shared across the species.
+   *
+   * @param tempK temperature, K
+   * @param outJPerMol receives g°_i, J/mol, at index {@link Species#ordinal()}; length ≥ 7
+   */
+  public static void gibbsEnergiesJPerMol(double tempK, double[] outJPerMol) {
+    checkTemp(tempK);
+    double t = tempK * 1e-3;
+    double lnT = Math.log(t);
+    double invT = 1.0 / t;
+    for (int i = 0; i < Species.COUNT; i++) {
+      if (tempK < lowLimit(i) || tempK > highLimit(i)) {
+        outJPerMol[i] = gibbsChecked(i, tempK, lnT);
+        continue;
+      }
+      double[] a = row(i, tempK);
+      // h/1000 = A t + B t^2/2 + C t^3/3 + D t^4/4 - E/t + F
+      double hK = t * (a[0] + t * (0.5 * a[1] + t * (a[2] / 3.0 + t * 0.25 * a[3])))
+          - a[4] * invT + a[5];
+      // s = A ln t + B t + C t^2/2 + D t^3/3 - E/(2 t^2) + G
+      double s = a[0] * lnT + t * (a[1] + t * (0.5 * a[2] + t * a[3] / 3.0))
+          - 0.5 * a[4] * invT * invT + a[6];
+      outJPerMol[i] = 1e3 * hK - tempK * s;
+    }
+  }
+
+  /**
    * Heat capacities of all species at one temperature, into a caller-owned array.
    *
    * @param tempK temperature, K
