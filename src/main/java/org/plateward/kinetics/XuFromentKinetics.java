@@ -19,8 +19,9 @@ import org.plateward.thermo.Species;
  * Partial pressures in bar. Rate and adsorption constants are the paper's Table 6,
  * k = A exp(−E/RT), K = A exp(−ΔH/RT), with R = 8.314 J/(mol K) as in the fit; the rate
  * constants are converted from kmol/(kg_cat h) to mol/(kg_cat s) (factor 1/3.6). The
- * equilibrium constants K1 (bar²) and K2 (−) are exp(−ΔG°/RT) from {@link IdealGasThermo}, the same
- * values as {@link Reaction#equilibriumConstant} (NIST-JANAF thermochemistry), not from a fitted correlation, so the rates vanish exactly at
+ * equilibrium constants K1 (bar²) and K2 (−) are exp(−ΔG°/RT) from {@link IdealGasThermo}, the
+ * same values as {@link Reaction#equilibriumConstant} (NIST-JANAF thermochemistry), not a
+ * fitted correlation, so the rates vanish exactly at
  * the thermodynamic equilibrium of the same thermo the reactor energy balance uses.
  *
  * <p>Table 6 is for the paper's reference (partly aged) catalyst; fresh catalyst was 2.246×
@@ -110,7 +111,8 @@ public final class XuFromentKinetics {
       throw new IllegalArgumentException("constants array needs " + CONSTANTS + " slots");
     }
     // Equilibrium first, using out[0..6] as scratch for the species Gibbs energies:
-    // ln K = -ΔG°/(R T), ΔG°_I = g_CO + 3 g_H2 - g_CH4 - g_H2O, ΔG°_II = g_CO2 + g_H2 - g_CO - g_H2O
+    // ln K = -ΔG°/(R T), ΔG°_I = g_CO + 3 g_H2 - g_CH4 - g_H2O,
+    // ΔG°_II = g_CO2 + g_H2 - g_CO - g_H2O
     // (the same sums as Reaction.STEAM_REFORMING / WATER_GAS_SHIFT, shared logarithm).
     IdealGasThermo.gibbsEnergiesJPerMol(tempK, out);
     double gCh4 = out[CH4];

@@ -40,6 +40,12 @@ public class KineticsBench {
     return tempK;
   }
 
+  /** Reference point for the machine's speed: one Math.exp of a varying argument. */
+  @Benchmark
+  public double expBaseline() {
+    return Math.exp(-240.1e3 / (8.314 * nextTemp()));
+  }
+
   @Benchmark
   public double xuFromentConstants() {
     XuFromentKinetics.constants(nextTemp(), constants);
