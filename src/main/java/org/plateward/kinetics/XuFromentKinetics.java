@@ -1,6 +1,8 @@
 package org.plateward.kinetics;
 
+import org.plateward.thermo.IdealGasThermo;
 import org.plateward.thermo.Reaction;
+import org.plateward.thermo.Species;
 
 /**
  * Intrinsic steam-reforming and water-gas-shift kinetics on Ni/MgAl2O4 of Xu &amp; Froment
@@ -17,8 +19,9 @@ import org.plateward.thermo.Reaction;
  * Partial pressures in bar. Rate and adsorption constants are the paper's Table 6,
  * k = A exp(−E/RT), K = A exp(−ΔH/RT), with R = 8.314 J/(mol K) as in the fit; the rate
  * constants are converted from kmol/(kg_cat h) to mol/(kg_cat s) (factor 1/3.6). The
- * equilibrium constants K1 (bar²) and K2 (−) come from {@link Reaction#equilibriumConstant}
- * (NIST-JANAF thermochemistry), not from a fitted correlation, so the rates vanish exactly at
+ * equilibrium constants K1 (bar²) and K2 (−) are exp(−ΔG°/RT) from {@link IdealGasThermo}, the
+ * same values as {@link Reaction#equilibriumConstant} (NIST-JANAF thermochemistry), not a
+ * fitted correlation, so the rates vanish exactly at
  * the thermodynamic equilibrium of the same thermo the reactor energy balance uses.
  *
  * <p>Table 6 is for the paper's reference (partly aged) catalyst; fresh catalyst was 2.246×
@@ -87,6 +90,12 @@ public final class XuFromentKinetics {
   private static final double A_K2_SI = A_K2 * PER_HOUR_KMOL_TO_MOL_PER_S;
   private static final double A_K3_SI = A_K3 * PER_HOUR_KMOL_TO_MOL_PER_S;
 
+  private static final int CH4 = Species.CH4.ordinal();
+  private static final int H2O = Species.H2O.ordinal();
+  private static final int CO = Species.CO.ordinal();
+  private static final int CO2 = Species.CO2.ordinal();
+  private static final int H2 = Species.H2.ordinal();
+
   private XuFromentKinetics() {}
 
   /**
@@ -98,9 +107,22 @@ public final class XuFromentKinetics {
    * @param out receives the constants; length ≥ {@link #CONSTANTS}
    */
   public static void constants(double tempK, double[] out) {
-    if (!(tempK > 0.0)) {
-      throw new IllegalArgumentException("temperature must be > 0 K, got " + tempK);
+    if (out.length < CONSTANTS) {
+      throw new IllegalArgumentException("constants array needs " + CONSTANTS + " slots");
     }
+    // Equilibrium first, using out[0..6] as scratch for the species Gibbs energies:
+    // ln K = -ΔG°/(R T), ΔG°_I = g_CO + 3 g_H2 - g_CH4 - g_H2O,
+    // ΔG°_II = g_CO2 + g_H2 - g_CO - g_H2O
+    // (the same sums as Reaction.STEAM_REFORMING / WATER_GAS_SHIFT, shared logarithm).
+    IdealGasThermo.gibbsEnergiesJPerMol(tempK, out);
+    double gCh4 = out[CH4];
+    double gH2o = out[H2O];
+    double gCo = out[CO];
+    double gCo2 = out[CO2];
+    double gH2 = out[H2];
+    double invRtThermo = 1.0 / (IdealGasThermo.R_J_PER_MOL_K * tempK);
+    out[K1_EQ] = Math.exp(-(gCo + 3.0 * gH2 - gCh4 - gH2o) * invRtThermo);
+    out[K2_EQ] = Math.exp(-(gCo2 + gH2 - gCo - gH2o) * invRtThermo);
     double invRt = 1.0 / (R_FIT * tempK);
     out[K1_RATE] = A_K1_SI * Math.exp(-E_K1 * invRt);
     out[K2_RATE] = A_K2_SI * Math.exp(-E_K2 * invRt);
@@ -109,8 +131,6 @@ public final class XuFromentKinetics {
     out[K_H2] = A_KH2 * Math.exp(-DH_KH2 * invRt);
     out[K_CH4] = A_KCH4 * Math.exp(-DH_KCH4 * invRt);
     out[K_H2O] = A_KH2O * Math.exp(-DH_KH2O * invRt);
-    out[K1_EQ] = Reaction.STEAM_REFORMING.equilibriumConstant(tempK);
-    out[K2_EQ] = Reaction.WATER_GAS_SHIFT.equilibriumConstant(tempK);
   }
 
   /**

@@ -47,7 +47,10 @@ public final class IdealGasThermo {
   /** Molar gas constant (CODATA 2018, exact), J/(mol K). */
   public static final double R_J_PER_MOL_K = 8.314462618;
 
-  /** Shomate coefficient rows: A, B, C, D, E, F, G (F, G continuity-adjusted, see class doc). */
+  /**
+   * Shomate coefficient rows: A, B, C, D, E, F, G (F, G continuity-adjusted, see class doc),
+   * then derived constants (see {@link #extend}).
+   */
   private static final double[][][] COEF = new double[Species.COUNT][][];
 
   /** Range limits per species: {T0, T1, ..., Tn}; range r covers [T_r, T_(r+1)]. */
@@ -101,7 +104,7 @@ public final class IdealGasThermo {
     int i = sp.ordinal();
     double[][] c = new double[ranges.length][];
     for (int r = 0; r < ranges.length; r++) {
-      c[r] = ranges[r].clone();
+      c[r] = extend(ranges[r]);
     }
     // Continuity: shift F (kJ/mol) and G of range r+1 so h and s match range r at the boundary.
     for (int r = 0; r + 1 < c.length; r++) {
@@ -125,6 +128,20 @@ public final class IdealGasThermo {
     S_HI[i] = sFit(last, hi);
   }
 
+  /**
+   * A, B, C, D, E, F, G followed by the integration constants used in h and s: [7] B/2,
+   * [8] C/3, [9] D/4, [10] C/2, [11] D/3, so the hot path multiplies instead of dividing.
+   */
+  private static double[] extend(double[] published) {
+    double[] a = java.util.Arrays.copyOf(published, 12);
+    a[7] = 0.5 * a[1];
+    a[8] = a[2] / 3.0;
+    a[9] = 0.25 * a[3];
+    a[10] = 0.5 * a[2];
+    a[11] = a[3] / 3.0;
+    return a;
+  }
+
   // --- the Shomate forms for one coefficient row (t = T/1000) ---
 
   private static double cpFit(double[] a, double tempK) {
@@ -135,8 +152,7 @@ public final class IdealGasThermo {
   private static double hFit(double[] a, double tempK) {
     double t = tempK * 1e-3;
     // h/1000 = A t + B t^2/2 + C t^3/3 + D t^4/4 - E/t + F
-    return 1e3 * (t * (a[0] + t * (0.5 * a[1] + t * (a[2] / 3.0 + t * 0.25 * a[3])))
-        - a[4] / t + a[5]);
+    return 1e3 * (t * (a[0] + t * (a[7] + t * (a[8] + t * a[9]))) - a[4] / t + a[5]);
   }
 
   private static double sFit(double[] a, double tempK) {
@@ -146,8 +162,7 @@ public final class IdealGasThermo {
 
   private static double sFit(double[] a, double t, double lnT) {
     // s = A ln t + B t + C t^2/2 + D t^3/3 - E/(2 t^2) + G
-    return a[0] * lnT + t * (a[1] + t * (0.5 * a[2] + t * a[3] / 3.0))
-        - 0.5 * a[4] / (t * t) + a[6];
+    return a[0] * lnT + t * (a[1] + t * (a[10] + t * a[11])) - 0.5 * a[4] / (t * t) + a[6];
   }
 
   private static double[] row(int species, double tempK) {
@@ -304,6 +319,33 @@ public final class IdealGasThermo {
   public static void enthalpiesJPerMol(double tempK, double[] outJPerMol) {
     for (int i = 0; i < Species.COUNT; i++) {
       outJPerMol[i] = enthalpyJPerMol(i, tempK);
+    }
+  }
+
+  /**
+   * Standard Gibbs energies g° = h − T s° of all species at one temperature, into a
+   * caller-owned array; the powers and logarithm of T are shared across the species.
+   *
+   * @param tempK temperature, K
+   * @param outJPerMol receives g°_i, J/mol, at index {@link Species#ordinal()}; length ≥ 7
+   */
+  public static void gibbsEnergiesJPerMol(double tempK, double[] outJPerMol) {
+    checkTemp(tempK);
+    double t = tempK * 1e-3;
+    double lnT = Math.log(t);
+    double invT = 1.0 / t;
+    for (int i = 0; i < Species.COUNT; i++) {
+      if (tempK < lowLimit(i) || tempK > highLimit(i)) {
+        outJPerMol[i] = gibbsChecked(i, tempK, lnT);
+        continue;
+      }
+      double[] a = row(i, tempK);
+      // h/1000 = A t + B t^2/2 + C t^3/3 + D t^4/4 - E/t + F
+      double hK = t * (a[0] + t * (a[7] + t * (a[8] + t * a[9]))) - a[4] * invT + a[5];
+      // s = A ln t + B t + C t^2/2 + D t^3/3 - E/(2 t^2) + G
+      double s =
+          a[0] * lnT + t * (a[1] + t * (a[10] + t * a[11])) - 0.5 * a[4] * invT * invT + a[6];
+      outJPerMol[i] = 1e3 * hK - tempK * s;
     }
   }
 

@@ -104,6 +104,25 @@ class IdealGasThermoTest {
   }
 
   @Test
+  void batchEvaluationsMatchSingleSpeciesOnes() {
+    double[] g = new double[Species.COUNT];
+    double[] h = new double[Species.COUNT];
+    double[] cp = new double[Species.COUNT];
+    for (double t : new double[] {250, 298.15, 450, 999, 1000, 1250, 1800, 2600}) {
+      IdealGasThermo.gibbsEnergiesJPerMol(t, g);
+      IdealGasThermo.enthalpiesJPerMol(t, h);
+      IdealGasThermo.heatCapacitiesJPerMolK(t, cp);
+      for (Species sp : Species.values()) {
+        int i = sp.ordinal();
+        double gi = IdealGasThermo.gibbsJPerMol(sp, t);
+        assertThat(g[i]).as("%s at %s K", sp, t).isCloseTo(gi, within(1e-9 * Math.abs(gi)));
+        assertThat(h[i]).isEqualTo(IdealGasThermo.enthalpyJPerMol(sp, t));
+        assertThat(cp[i]).isEqualTo(IdealGasThermo.heatCapacityJPerMolK(sp, t));
+      }
+    }
+  }
+
+  @Test
   void rejectsNonPhysicalTemperature() {
     assertThatThrownBy(() -> IdealGasThermo.enthalpyJPerMol(Species.CH4, 0.0))
         .isInstanceOf(IllegalArgumentException.class);
