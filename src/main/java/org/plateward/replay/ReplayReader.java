@@ -340,7 +340,7 @@ public final class ReplayReader implements Iterator<ReplayRecord>, AutoCloseable
       if (cell.charAt(cell.length() - 1) != 'Z') {
         throw new DateTimeParseException("no Z", cell, cell.length() - 1);
       }
-      t = Instant.parse(cell);
+      t = UtcTimestamps.parse(cell);
     } catch (DateTimeParseException e) {
       throw error(
           lineNumber,
