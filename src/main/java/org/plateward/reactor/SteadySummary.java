@@ -14,7 +14,7 @@ import org.plateward.thermo.Species;
  * @param combMethaneConversion combustion-side methane conversion, 0..1
  * @param bufferMeltFraction length-weighted overall melt fraction, 0..1
  * @param maxCellMeltFraction largest melt fraction of any cell, 0..1
- * @param energyBalanceRelError relative energy imbalance
+ * @param energyBalanceRelError relative steady-state energy imbalance (in - out - loss over duty)
  * @param elementBalanceRelError relative atom imbalance (worst of C, H, O, N)
  * @param cells number of cells
  * @param iterations solver iterations
@@ -75,7 +75,7 @@ public record SteadySummary(
         1.0 - ev.combustion.flows[ch4] / ev.combustion.flows[n * ns + ch4],
         melt / model.grid().lengthM(),
         maxMelt,
-        UnitBalances.energyRelativeError(model, ev, p),
+        UnitBalances.steadyEnergyRelativeError(model, ev, p),
         UnitBalances.elementRelativeError(model, ev),
         n,
         iterations,
