@@ -60,11 +60,13 @@ public record FilterSettings(
    * Defaults: 1 s sub-steps; gates at 0.9973 (the 3σ two-sided probability, common practice);
    * NIS window of 100 updates, 95% band; adaptive Q off (window 60, λ ≤ 10); CUSUM k = 0.5,
    * h = 8 (in-control run length about 9,500 updates per channel); 120 epochs of history;
-   * a full Cholesky check every update; eigenvalue floor 1e-12 relative, 1e-15 absolute.
+   * a full Cholesky check every update; eigenvalue floor 1e-9 of the largest eigenvalue (about
+   * √ε: small enough not to disturb a healthy direction, large enough that P stays
+   * factorisable), 1e-15 absolute.
    */
   public static FilterSettings defaults() {
     return new FilterSettings(
-        1.0, true, 0.9973, 0.9973, 100, 0.95, false, 60, 10.0, 0.5, 8.0, 120, true, 1e-12, 1e-15);
+        1.0, true, 0.9973, 0.9973, 100, 0.95, false, 60, 10.0, 0.5, 8.0, 120, true, 1e-9, 1e-15);
   }
 
   /** Copy with another sub-step bound (s). */
