@@ -7,8 +7,10 @@ package org.plateward.estimation;
  *
  * <pre>  λ = Σ_k Σ_i (ν_i² − R_ii) / Σ_k Σ_i (H P⁻ Hᵀ)_ii        (used channels i, updates k)</pre>
  *
- * is the factor by which the predicted part of the innovation covariance is too small. The
- * filter multiplies its model Q by λ clamped to [1, λ_max]. A single scalar (rather than the
+ * is the factor by which the predicted part of the innovation covariance is too small. Since
+ * α is measured with the inflation already in force, the factor is updated multiplicatively
+ * and damped over the window: λ ← clamp(λ · α^{1/N}, 1, λ_max); it settles where α = 1, that is
+ * where the innovations match S. The filter multiplies its model Q by λ. A single scalar (rather than the
  * full K Ĉ_ν Kᵀ estimate) keeps Q's shape, which carries the physics, and cannot make Q
  * indefinite; the clamp keeps an outlier burst from blowing the covariance up.
  */
@@ -21,6 +23,7 @@ public final class ProcessNoiseAdapter {
   private int next;
   private double sumExcess;
   private double sumPredicted;
+  private double lambda = 1.0;
 
   /**
    * @param window number of updates N in the window
@@ -59,13 +62,15 @@ public final class ProcessNoiseAdapter {
     sumExcess += innovationExcess;
     sumPredicted += predictedVariance;
     next = (next + 1) % excess.length;
+    if (count >= minSamples && sumPredicted > 0.0) {
+      // α below 0 (innovations smaller than R alone) is treated as a strong "too large"
+      final double alpha = Math.max(0.1, sumExcess / sumPredicted);
+      lambda = Math.min(maxInflation, Math.max(1.0, lambda * Math.pow(alpha, 1.0 / excess.length)));
+    }
   }
 
   /** Current factor λ in [1, λ_max]; 1 until half the window is filled. */
   public double inflation() {
-    if (count < minSamples || !(sumPredicted > 0.0)) {
-      return 1.0;
-    }
-    return Math.min(maxInflation, Math.max(1.0, sumExcess / sumPredicted));
+    return lambda;
   }
 }
