@@ -29,7 +29,7 @@ final class CovarianceGuard {
         return false;
       }
     }
-    return !fullCheck || Matrices.cholesky(p, p.length, work);
+    return !fullCheck || Matrices.isCholeskyFactorisable(p, work);
   }
 
   /**

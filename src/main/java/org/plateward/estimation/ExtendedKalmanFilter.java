@@ -521,7 +521,7 @@ public final class ExtendedKalmanFilter {
   /**
    * K = P Hᵀ S⁻¹ (as Kᵀ = S⁻¹ H P by a Cholesky solve); x ← x + K ν;
    * P ← (I − K H) P (I − K H)ᵀ + K R Kᵀ, evaluated as W = P − K (H P), P = W − (W Hᵀ − K R) Kᵀ,
-   * which is the same product without forming the n×n matrix I − K H.
+   * which is the same product without forming the n×n matrix I − K H (O(n²m), not O(n³)).
    */
   private void josephUpdate(UpdateWork w, StoredUpdate up, int[] used, double[] nu) {
     final int mu = used.length;
@@ -549,30 +549,39 @@ public final class ExtendedKalmanFilter {
         }
       }
     }
-    // D = W Hᵀ − K R   (n×mu)
-    for (int i = 0; i < n; i++) {
-      final double[] wi = work[i];
-      final double[] di = w.d[i];
-      for (int r = 0; r < mu; r++) {
-        final double[] hr = w.h[used[r]];
-        double s = 0.0;
-        for (int k = 0; k < n; k++) {
-          s += wi[k] * hr[k];
+    // Dᵀ = H Wᵀ − (K R)ᵀ  (mu×n), in axpy form over the rows of Wᵀ so the loops vectorise
+    Matrices.transposeInto(work, lu);
+    for (int r = 0; r < mu; r++) {
+      final double[] dr = w.dt[r];
+      Arrays.fill(dr, 0.0);
+      final double[] hr = w.h[used[r]];
+      for (int k = 0; k < n; k++) {
+        final double hk = hr[k];
+        if (hk == 0.0) {
+          continue;
         }
-        double kr = 0.0;
-        for (int q = 0; q < mu; q++) {
-          kr += w.kt[q][i] * up.r[used[q]][used[r]];
+        final double[] wk = lu[k];
+        for (int j = 0; j < n; j++) {
+          dr[j] += hk * wk[j];
         }
-        di[r] = s - kr;
+      }
+      for (int q = 0; q < mu; q++) {
+        final double rq = up.r[used[q]][used[r]];
+        if (rq == 0.0) {
+          continue;
+        }
+        final double[] kq = w.kt[q];
+        for (int j = 0; j < n; j++) {
+          dr[j] -= rq * kq[j];
+        }
       }
     }
     // P = W − D Kᵀ
     for (int i = 0; i < n; i++) {
       final double[] pi = p[i];
       System.arraycopy(work[i], 0, pi, 0, n);
-      final double[] di = w.d[i];
       for (int r = 0; r < mu; r++) {
-        final double dir = di[r];
+        final double dir = w.dt[r][i];
         final double[] kr = w.kt[r];
         for (int j = 0; j < n; j++) {
           pi[j] -= dir * kr[j];
@@ -750,7 +759,7 @@ public final class ExtendedKalmanFilter {
     final double[][] l;
     final double[] sinvNu;
     final double[][] kt;
-    final double[][] d;
+    final double[][] dt;
     final double[] priorDiag;
 
     UpdateWork(int m, int n) {
@@ -764,7 +773,7 @@ public final class ExtendedKalmanFilter {
       l = new double[m][m];
       sinvNu = new double[m];
       kt = new double[m][n];
-      d = new double[n][m];
+      dt = new double[m][n];
       priorDiag = new double[n];
     }
   }

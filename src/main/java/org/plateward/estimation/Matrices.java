@@ -270,6 +270,39 @@ final class Matrices {
     return true;
   }
 
+  /**
+   * Positive-definiteness test by an upper Cholesky factorisation A = UᵀU written row by row
+   * into u (axpy form: U_j,j: = (A_j,j: − Σ_k U_kj U_k,j:)/U_jj), which vectorises.
+   *
+   * @return false if a pivot is not positive and finite
+   */
+  static boolean isCholeskyFactorisable(double[][] a, double[][] u) {
+    final int n = a.length;
+    for (int j = 0; j < n; j++) {
+      final double[] uj = u[j];
+      System.arraycopy(a[j], j, uj, j, n - j);
+      for (int k = 0; k < j; k++) {
+        final double[] uk = u[k];
+        final double c = uk[j];
+        if (c == 0.0) {
+          continue;
+        }
+        for (int i = j; i < n; i++) {
+          uj[i] -= c * uk[i];
+        }
+      }
+      final double d = uj[j];
+      if (!(d > 0.0) || !Double.isFinite(d)) {
+        return false;
+      }
+      final double inv = 1.0 / Math.sqrt(d);
+      for (int i = j; i < n; i++) {
+        uj[i] *= inv;
+      }
+    }
+    return true;
+  }
+
   /** Solves (L Lᵀ) X = B in place for the leading d rows of B (B d×c). */
   static void choleskySolve(double[][] l, int d, double[][] b, int cols) {
     for (int i = 0; i < d; i++) {
