@@ -78,7 +78,9 @@ final class CombustionChannel {
             / hydraulicDiameterM;
         double keff = CatalyticCombustion.effectiveRateConstantMPerS(activity * ks, km);
         double cTot = pressurePa / (R * tin);
-        xi = nCh4 * -Math.expm1(-keff * coatedAreaM2[j] * cTot / nTot);
+        double k = keff * coatedAreaM2[j] * cTot / nTot;
+        // 1 - exp(-k), with its series where exp would lose digits
+        xi = nCh4 * (k < 1e-5 ? k * (1.0 - 0.5 * k) : 1.0 - Math.exp(-k));
         xi = Math.min(xi, 0.5 * f[in + O2] * (1.0 - 1e-12));
       }
       for (int k = 0; k < NS; k++) {

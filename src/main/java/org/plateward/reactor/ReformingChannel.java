@@ -31,6 +31,7 @@ final class ReformingChannel {
   private final double nusselt;
   /** Rate constants per cell at the base plate temperatures. */
   private final double[][] constantsCache;
+
   private final double[] constantsScratch = new double[NC];
   private final double[] x = new double[NS];
   private final double[] r = new double[3];
@@ -52,6 +53,7 @@ final class ReformingChannel {
     this.hydraulicDiameterM = 2.0 * g.reformingGapM();
     this.nusselt = nusselt;
     this.constantsCache = new double[cells][NC];
+
   }
 
   /**
@@ -120,6 +122,9 @@ final class ReformingChannel {
     double nTot = GasFlux.total(f, in);
     double da = 1e-7 * nTot;
     double tol = 1e-12 * nTot;
+    // Every solve starts from zero extent, so f is a pure function of its arguments. A cell
+    // is a small stirred tank: with autocatalysis near the hydrogen-poor inlet it can have
+    // more than one root, and a start elsewhere (a warm start was tried) can select another.
     double a = 0.0;
     double b = 0.0;
     for (int it = 0; it < MAX_NEWTON; it++) {
@@ -149,6 +154,7 @@ final class ReformingChannel {
   }
 
   private static final int MAX_NEWTON = 40;
+
 
   /**
    * Safeguards a step (d1, d2) from (a, b) so that every species flow stays non-negative:

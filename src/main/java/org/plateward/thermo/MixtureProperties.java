@@ -91,6 +91,8 @@ public final class MixtureProperties {
   /** Fuller: 1e-4 * 0.00143 * 1e5 / (√M_AB [..]²), so D = c T^1.75 / p[Pa] in m²/s. */
   private static final double[] FULLER_COEF = new double[N * N];
 
+  private static final ThreadLocal<double[]> INV_SQRT_MU = ThreadLocal.withInitial(() -> new double[N]);
+
   private static final ThreadLocal<double[]> SCRATCH =
       ThreadLocal.withInitial(() -> new double[3 * N]);
 
@@ -236,6 +238,10 @@ public final class MixtureProperties {
    */
   public static double thermalConductivityWPerMK(
       double[] moleFractions, double[] pureConductivityWPerMK, double[] sqrtViscosity) {
+    double[] inv = INV_SQRT_MU.get();
+    for (int j = 0; j < N; j++) {
+      inv[j] = moleFractions[j] != 0.0 ? 1.0 / sqrtViscosity[j] : 0.0;
+    }
     double lambda = 0.0;
     for (int i = 0; i < N; i++) {
       double x = moleFractions[i];
@@ -246,7 +252,7 @@ public final class MixtureProperties {
         for (int j = 0; j < N; j++) {
           double xj = moleFractions[j];
           if (xj != 0.0) {
-            double a = 1.0 + sqrtMuI / sqrtViscosity[j] * MASS_RATIO_QUARTER[row + j];
+            double a = 1.0 + sqrtMuI * inv[j] * MASS_RATIO_QUARTER[row + j];
             sum += xj * a * a * PHI_DENOM_INV[row + j];
           }
         }
@@ -255,6 +261,7 @@ public final class MixtureProperties {
     }
     return lambda;
   }
+
 
   /** Fills s[0..6] = μ_i, s[7..13] = √μ_i and optionally s[14..20] = λ_i for present species. */
   private static void fillPure(double[] x, double tempK, double[] s, boolean conductivity) {

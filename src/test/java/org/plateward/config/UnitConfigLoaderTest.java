@@ -33,7 +33,7 @@ class UnitConfigLoaderTest {
     assertThat(g.plateThicknessM()).isCloseTo(1.2e-3, within(1e-15));
     assertThat(g.bufferThicknessM()).isCloseTo(0.6e-3, within(1e-15));
     assertThat(g.channelPairs()).isEqualTo(24);
-    assertThat(g.reformingCoating()).containsExactly(new Zone(0.0, 0.6));
+    assertThat(g.reformingCoating()).containsExactly(new Zone(0.0, 0.5));
     assertThat(g.combustionCoating()).hasSize(1);
     assertThat(g.combustionCoating().get(0).startM()).isCloseTo(0.050, within(1e-12));
     assertThat(g.combustionCoating().get(0).endM()).isCloseTo(0.500, within(1e-12));
@@ -43,18 +43,18 @@ class UnitConfigLoaderTest {
     assertThat(u.buffer().latentHeatJPerKg()).isCloseTo(206.7e3, within(1e-6));
     assertThat(u.buffer().mushyBandK()).isEqualTo(2.0);
     assertThat(u.plate().materialLimitK()).isCloseTo(1150 + 273.15, within(1e-9));
-    assertThat(u.catalyst().reformingLoadingKgPerM2()).isCloseTo(0.050, within(1e-12));
+    assertThat(u.catalyst().reformingLoadingKgPerM2()).isCloseTo(0.015, within(1e-12));
     assertThat(u.heatLoss().ambientK()).isCloseTo(298.15, within(1e-9));
     var op = u.operatingPoint();
     assertThat(op.reformingGasFlowMolPerS()).isCloseTo(19.5 * NM3_H_TO_MOL_S, within(1e-9));
-    assertThat(op.steamFlowMolPerS()).isCloseTo(38 * KG_H_STEAM_TO_MOL_S, within(1e-9));
+    assertThat(op.steamFlowMolPerS()).isCloseTo(44 * KG_H_STEAM_TO_MOL_S, within(1e-9));
     assertThat(op.reformingInletTempK()).isCloseTo(833.15, within(1e-9));
     assertThat(op.reformingPressurePa()).isCloseTo(320e3, within(1e-6));
     assertThat(op.airFlowMolPerS()).isCloseTo(230 * NM3_H_TO_MOL_S, within(1e-9));
     assertThat(op.combustionPressurePa()).isCloseTo(130e3, within(1e-6));
     var f = u.feedGas();
     assertThat(f.methane() + f.hydrogen() + f.carbonDioxide() + f.nitrogen()).isCloseTo(1.0, within(1e-12));
-    assertThat(u.grid().cells()).isEqualTo(40);
+    assertThat(u.grid().cells()).isEqualTo(60);
     assertThat(u.grid().refinementWidthM()).isCloseTo(0.030, within(1e-12));
   }
 
@@ -151,7 +151,7 @@ class UnitConfigLoaderTest {
   void overlappingZonesAndTemperaturesBelowAbsoluteZeroAreRefused(@TempDir Path dir) throws Exception {
     Path file = dir.resolve("overlap.toml");
     Files.writeString(file, Files.readString(ConfigFixtures.DEMO)
-        .replace("reforming_coating = [{ start = \"0 mm\", end = \"600 mm\" }]",
+        .replace("reforming_coating = [{ start = \"0 mm\", end = \"500 mm\" }]",
             "reforming_coating = [{ start = \"0 mm\", end = \"300 mm\" }, { start = \"200 mm\", end = \"600 mm\" }]")
         .replace("ambient = \"25 degC\"", "ambient = \"-300 degC\""));
     var e = catchThrowableOfType(InvalidConfigException.class, () -> PlatewardConfig.load(file));
@@ -164,7 +164,7 @@ class UnitConfigLoaderTest {
   @Test
   void wholeNumbersMustBeWhole(@TempDir Path dir) throws Exception {
     Path file = dir.resolve("cells.toml");
-    Files.writeString(file, Files.readString(ConfigFixtures.DEMO).replace("cells = 40", "cells = 40.5"));
+    Files.writeString(file, Files.readString(ConfigFixtures.DEMO).replace("cells = 60", "cells = 40.5"));
     var e = catchThrowableOfType(InvalidConfigException.class, () -> PlatewardConfig.load(file));
     assertThat(e.errors()).extracting(ConfigError::format)
         .containsExactly(file + ":" + ConfigFixtures.lineOf(file, "^cells") + ": model.cells: must be a whole number, got 40.5");
