@@ -3,8 +3,8 @@ package org.plateward.config;
 import java.util.Collection;
 import java.util.Locale;
 
-/** Suggestions for misspelt keys and table names. */
-final class Spelling {
+/** Suggestions for misspelt keys, table names, column names and status names. */
+public final class Spelling {
   private Spelling() {}
 
   /**
@@ -39,12 +39,12 @@ final class Spelling {
    * The candidate closest to {@code word} if it is close enough to be a likely typo (at most
    * one edit per three characters of the shorter word, and at least one), else null.
    */
-  static String closest(String word, Collection<String> candidates) {
+  public static String closest(String word, Collection<String> candidates) {
     String w = word.toLowerCase(Locale.ROOT);
     String best = null;
     int bestD = Integer.MAX_VALUE;
     for (String c : candidates) {
-      int d = distance(w, c);
+      int d = distance(w, c.toLowerCase(Locale.ROOT));
       if (d < bestD) {
         bestD = d;
         best = c;

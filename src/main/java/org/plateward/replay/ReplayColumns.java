@@ -59,40 +59,4 @@ public final class ReplayColumns {
     return names;
   }
 
-  /**
-   * The candidate closest to {@code name} by Levenshtein distance, if it is close enough to be a
-   * likely typo (distance at most max(2, length/4)); otherwise null.
-   */
-  static String closest(String name, List<String> candidates) {
-    String best = null;
-    int bestDistance = Integer.MAX_VALUE;
-    for (String c : candidates) {
-      int d = levenshtein(name, c);
-      if (d < bestDistance) {
-        bestDistance = d;
-        best = c;
-      }
-    }
-    return bestDistance <= Math.max(2, name.length() / 4) ? best : null;
-  }
-
-  /** Edit distance (insertions, deletions, substitutions), two-row dynamic programme. */
-  static int levenshtein(String a, String b) {
-    int[] prev = new int[b.length() + 1];
-    int[] cur = new int[b.length() + 1];
-    for (int j = 0; j <= b.length(); j++) {
-      prev[j] = j;
-    }
-    for (int i = 1; i <= a.length(); i++) {
-      cur[0] = i;
-      for (int j = 1; j <= b.length(); j++) {
-        int sub = prev[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1);
-        cur[j] = Math.min(sub, Math.min(prev[j] + 1, cur[j - 1] + 1));
-      }
-      int[] t = prev;
-      prev = cur;
-      cur = t;
-    }
-    return prev[b.length()];
-  }
 }

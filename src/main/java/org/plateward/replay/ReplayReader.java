@@ -1,5 +1,7 @@
 package org.plateward.replay;
 
+import org.plateward.config.Spelling;
+
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.Reader;
@@ -160,7 +162,7 @@ public final class ReplayReader implements Iterator<ReplayRecord>, AutoCloseable
         kinds[c] = Kind.TRUTH;
         continue;
       }
-      String guess = ReplayColumns.closest(n, known);
+      String guess = Spelling.closest(n, known);
       throw error(
           lineNumber,
           n,
@@ -375,7 +377,7 @@ public final class ReplayReader implements Iterator<ReplayRecord>, AutoCloseable
     for (StatusName s : StatusName.values()) {
       known.add(s.text());
     }
-    String guess = ReplayColumns.closest(cell, known);
+    String guess = Spelling.closest(cell, known);
     return "unknown OPC UA status name '"
         + cell
         + "'"
