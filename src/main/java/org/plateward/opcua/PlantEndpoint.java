@@ -3,6 +3,7 @@ package org.plateward.opcua;
 import java.security.cert.X509Certificate;
 import java.util.EnumMap;
 import java.util.Map;
+import java.util.Set;
 import java.util.function.UnaryOperator;
 import org.eclipse.milo.opcua.sdk.server.nodes.UaVariableNode;
 import org.eclipse.milo.opcua.stack.core.types.builtin.DataValue;
