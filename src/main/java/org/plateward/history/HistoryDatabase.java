@@ -56,7 +56,6 @@ final class HistoryDatabase {
           + " exists but is not a regular file");
     }
     SQLiteConfig cfg = new SQLiteConfig();
-    cfg.setJournalMode(SQLiteConfig.JournalMode.WAL);
     cfg.setSynchronous(SQLiteConfig.SynchronousMode.NORMAL);
     cfg.setBusyTimeout(BUSY_TIMEOUT_MS);
     cfg.setTransactionMode(SQLiteConfig.TransactionMode.IMMEDIATE);
@@ -65,13 +64,16 @@ final class HistoryDatabase {
     Connection c = null;
     try {
       c = DriverManager.getConnection(url(file), cfg.toProperties());
-      String mode = pragma(c, "journal_mode");
+      // check what the file is before anything is written to it (switching to WAL rewrites
+      // the header)
+      int version = migrator.check(c, file);
+      String mode = pragma(c, "journal_mode = WAL");
       if (!"wal".equalsIgnoreCase(mode)) {
         throw new HistoryException(Problem.READ_ONLY, "history file " + file
             + " could not be switched to WAL journal mode (it stays in \"" + mode + "\"): is the"
             + " file or its folder read-only?");
       }
-      if (SchemaMigrator.versionOf(c, file) == 0) {
+      if (version == 0) {
         try (Statement s = c.createStatement()) {
           // only takes effect before the first table; lets prune return freed pages to the disk
           s.execute("PRAGMA auto_vacuum = INCREMENTAL");

@@ -61,7 +61,7 @@ public final class SchemaMigrator {
           return 0;
         }
         throw new HistoryException(Problem.NOT_A_HISTORY, "file " + file + " is an SQLite"
-            + " database with " + tables + " tables but no schema_version table: not a Plateward"
+            + " database with " + tables + " table(s) but no schema_version table: not a Plateward"
             + " history; it was left untouched: name another file in [history] path");
       }
       try (ResultSet r = s.executeQuery("SELECT coalesce(max(version), 0) FROM schema_version")) {
@@ -79,6 +79,21 @@ public final class SchemaMigrator {
    *     NOT_A_HISTORY for a foreign database
    */
   public int migrate(Connection c, Path file) throws SQLException, HistoryException {
+    int version = check(c, file);
+    for (Migration m : migrations.subList(version, migrations.size())) {
+      apply(c, m);
+      LOG.info("history file {}: schema version {} ({})", file, m.version(), m.description());
+    }
+    return latestVersion();
+  }
+
+  /**
+   * Reads the version of a file without writing to it.
+   *
+   * @return the file's version, at most {@link #latestVersion()}
+   * @throws HistoryException NEWER_SCHEMA or NOT_A_HISTORY
+   */
+  public int check(Connection c, Path file) throws SQLException, HistoryException {
     int version = versionOf(c, file);
     if (version > latestVersion()) {
       throw new HistoryException(Problem.NEWER_SCHEMA, "history file " + file + " has schema"
@@ -86,11 +101,7 @@ public final class SchemaMigrator {
           + " Plateward understands; it was left untouched: open it with a newer Plateward, or"
           + " name another file in [history] path");
     }
-    for (Migration m : migrations.subList(version, migrations.size())) {
-      apply(c, m);
-      LOG.info("history file {}: schema version {} ({})", file, m.version(), m.description());
-    }
-    return latestVersion();
+    return version;
   }
 
   private static void apply(Connection c, Migration m) throws SQLException {
