@@ -87,6 +87,21 @@ final class TableReader {
     errors.add(lineOf(key), path(key), message);
   }
 
+  /**
+   * Whether an optional key is present. The key counts as known (for the unknown-key check in
+   * {@link #finish()}) either way; an absent optional key is no error.
+   */
+  boolean has(String key) {
+    known.add(key);
+    return node != null && node.has(key);
+  }
+
+  /** The raw value of a key, or null when absent (no error is reported). */
+  JsonNode raw(String key) {
+    known.add(key);
+    return node == null ? null : node.get(key);
+  }
+
   private JsonNode get(String key) {
     known.add(key);
     if (node == null) {
