@@ -96,6 +96,9 @@ final class HistoryDatabase {
     } catch (SQLException e) {
       closeQuietly(c);
       throw SqliteFaults.of(file, "opening for writing", e);
+    } catch (LinkageError e) {
+      closeQuietly(c);
+      throw nativeLibrary(e);
     } catch (HistoryException e) {
       closeQuietly(c);
       throw e;
@@ -130,10 +133,23 @@ final class HistoryDatabase {
     } catch (SQLException e) {
       closeQuietly(c);
       throw SqliteFaults.of(file, "opening for reading", e);
+    } catch (LinkageError e) {
+      closeQuietly(c);
+      throw nativeLibrary(e);
     } catch (HistoryException e) {
       closeQuietly(c);
       throw e;
     }
+  }
+
+  /**
+   * The driver extracts its native library to the temporary folder; a folder mounted noexec
+   * (or missing) makes that fail.
+   */
+  private static HistoryException nativeLibrary(LinkageError e) {
+    return new HistoryException(Problem.IO, "the SQLite native library could not be loaded ("
+        + e.getMessage() + "): start Plateward with -Dorg.sqlite.tmpdir=<a folder that allows"
+        + " executables>", e);
   }
 
   static String url(Path file) {

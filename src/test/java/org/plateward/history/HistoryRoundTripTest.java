@@ -133,4 +133,25 @@ class HistoryRoundTripTest {
     assertThat(appId).isEqualTo(HistorySchema.APPLICATION_ID);
     assertThat(HistoryFixtures.text(file, "PRAGMA integrity_check")).isEqualTo("ok");
   }
+
+  @Test
+  void anAlarmEventIsCommittedWithoutWaitingForTheBatchInterval() throws Exception {
+    Path file = dir.resolve("audit.db");
+    HistorySettings s = HistoryFixtures.settings(file)
+        .withBatching(Duration.ofMillis(1000), 100_000, 10_000);
+    try (HistoryRecorder r = HistoryRecorder.start(s)) {
+      r.appendFrame(HistoryFixtures.frame(T0));
+      Thread.sleep(50);
+      long t0 = System.nanoTime();
+      r.appendAlarmEvent(new AlarmEventRow(T0, "a", "NORMAL->UNACK_ACTIVE", "high", 1, 0, "m"));
+      long seen = 0;
+      // polled through a second, independent connection
+      while (seen == 0 && System.nanoTime() - t0 < 2_000_000_000L) {
+        seen = HistoryFixtures.count(file, "SELECT count(*) FROM alarm_events");
+      }
+      long waitedMs = (System.nanoTime() - t0) / 1_000_000;
+      assertThat(seen).isEqualTo(1);
+      assertThat(waitedMs).as("ms until the alarm event was visible").isLessThan(500);
+    }
+  }
 }
