@@ -12,10 +12,12 @@ import java.time.Instant;
  * @param droppedEntries entries refused because the queue was full or the recorder closed
  * @param unstoredEntries entries the writer took but could not store (database fault)
  * @param queueDepth entries waiting for the writer now
+ * @param walBytes size of the -wal file, bytes (-1 when unknown): it should stay small; a
+ *     growing WAL means checkpoints are starved by a reader that never finishes
  */
 public record HistoryHealth(
     State state, String reason, Instant since, long storedEntries, long droppedEntries,
-    long unstoredEntries, int queueDepth) {
+    long unstoredEntries, int queueDepth, long walBytes) {
   /** Whether history is being kept. */
   public enum State {
     OK,

@@ -1,7 +1,12 @@
 package org.plateward.history;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.Duration;
@@ -46,12 +51,15 @@ import org.slf4j.LoggerFactory;
 public final class HistoryRecorder implements AutoCloseable {
   private static final Logger LOG = LoggerFactory.getLogger(HistoryRecorder.class);
 
+  /** When idle, the writer truncates the -wal file this often (auto-checkpoints run anyway). */
+  private static final long CHECKPOINT_INTERVAL_NANOS = TimeUnit.MINUTES.toNanos(10);
+
   private final HistorySettings settings;
   private final SchemaMigrator migrator;
   private final Path file;
   private final ArrayBlockingQueue<Object> measurements;
   private final ArrayBlockingQueue<Object> audit;
-  private final ConcurrentLinkedQueue<PruneRequest> pruneRequests = new ConcurrentLinkedQueue<>();
+  private final ConcurrentLinkedQueue<Runnable> tasks = new ConcurrentLinkedQueue<>();
   private final Thread writer;
   private final Object progress = new Object();
 
@@ -74,8 +82,6 @@ public final class HistoryRecorder implements AutoCloseable {
   private long unkeptFromMs = Long.MAX_VALUE;
   private long unkeptToMs = Long.MIN_VALUE;
   private String unkeptReason;
-
-  private record PruneRequest(Instant now, CompletableFuture<PruneReport> result) {}
 
   private HistoryRecorder(HistorySettings settings, SchemaMigrator migrator) {
     this.settings = settings;
@@ -151,8 +157,15 @@ public final class HistoryRecorder implements AutoCloseable {
 
   /** The current state and counters. */
   public HistoryHealth health() {
+    long wal = 0;
+    try {
+      Path w = Path.of(file + "-wal");
+      wal = Files.exists(w) ? Files.size(w) : 0;
+    } catch (IOException | UncheckedIOException e) {
+      wal = -1;
+    }
     return new HistoryHealth(state, reason, since, stored, dropped.get(), unstored,
-        measurements.size() + audit.size());
+        measurements.size() + audit.size(), wal);
   }
 
   /**
@@ -195,13 +208,40 @@ public final class HistoryRecorder implements AutoCloseable {
    */
   public CompletableFuture<PruneReport> prune(Instant now) {
     CompletableFuture<PruneReport> f = new CompletableFuture<>();
+    submit(() -> runPrune(now, f), f);
+    return f;
+  }
+
+  /**
+   * Asks the writer for a consistent copy of the history file (SQLite {@code VACUUM INTO}),
+   * safe while history is being written, and checks that the copy passes
+   * {@code integrity_check}. Copying the file alone while the WAL holds frames is not safe.
+   *
+   * @param target the new file; it must not exist
+   * @return completes with {@code target}, or exceptionally with a {@link HistoryException}
+   */
+  public CompletableFuture<Path> backupTo(Path target) {
+    CompletableFuture<Path> f = new CompletableFuture<>();
+    submit(() -> runBackup(target, f), f);
+    return f;
+  }
+
+  private void submit(Runnable task, CompletableFuture<?> f) {
     if (closing) {
       f.completeExceptionally(new IllegalStateException("history recorder is closed"));
-      return f;
+      return;
     }
-    pruneRequests.add(new PruneRequest(now, f));
+    tasks.add(() -> {
+      try {
+        task.run();
+      } catch (RuntimeException e) {
+        f.completeExceptionally(e);
+      }
+    });
     LockSupport.unpark(writer);
-    return f;
+    if (!writer.isAlive()) {
+      f.completeExceptionally(new IllegalStateException("history writer is not running"));
+    }
   }
 
   /** Stores everything queued, checkpoints the WAL into the file and closes. */
@@ -237,6 +277,7 @@ public final class HistoryRecorder implements AutoCloseable {
     List<Object> batch = new ArrayList<>();
     long interval = settings.batchInterval().toNanos();
     long last = System.nanoTime();
+    long lastCheckpoint = last;
     while (true) {
       boolean stop = closing;
       long now = System.nanoTime();
@@ -245,24 +286,30 @@ public final class HistoryRecorder implements AutoCloseable {
           || measurements.size() >= settings.maxBatchEntries()
           || now - last >= interval
           || completed() < flushTarget
-          || !pruneRequests.isEmpty();
+          || !tasks.isEmpty();
       if (!due) {
         LockSupport.parkNanos(this, interval - (now - last));
         continue;
       }
       last = now;
       drainAndWrite(batch);
-      PruneRequest p;
-      while ((p = pruneRequests.poll()) != null) {
-        runPrune(p, batch);
+      Runnable task;
+      while ((task = tasks.poll()) != null) {
+        task.run();
+        drainAndWrite(batch);
       }
       if (stop && audit.isEmpty() && measurements.isEmpty()) {
         break;
       }
+      if (conn != null && audit.isEmpty() && measurements.isEmpty()
+          && now - lastCheckpoint >= CHECKPOINT_INTERVAL_NANOS) {
+        checkpoint();
+        lastCheckpoint = System.nanoTime();
+      }
     }
-    PruneRequest p;
-    while ((p = pruneRequests.poll()) != null) {
-      p.result().completeExceptionally(new IllegalStateException("history recorder closed"));
+    Runnable task;
+    while ((task = tasks.poll()) != null) {
+      task.run(); // completes after the last batch; prune and backup still have the connection
     }
     shutdown();
   }
@@ -388,30 +435,68 @@ public final class HistoryRecorder implements AutoCloseable {
     state = HistoryHealth.State.NOT_KEEPING;
   }
 
-  private void runPrune(PruneRequest p, List<Object> batch) {
+  private void runPrune(Instant now, CompletableFuture<PruneReport> f) {
     if (conn == null) {
-      p.result().completeExceptionally(new HistoryException(Problem.IO,
+      f.completeExceptionally(new HistoryException(Problem.IO,
           "cannot prune: history is not being kept: " + reason));
       return;
     }
+    List<Object> batch = new ArrayList<>();
     try {
-      PruneReport r = new Pruner(conn, settings, () -> drainAndWrite(batch)).prune(p.now());
-      LOG.info("history pruned as of {}: {}", p.now(), r);
-      p.result().complete(r);
+      PruneReport r = new Pruner(conn, settings, () -> drainAndWrite(batch)).prune(now);
+      LOG.info("history pruned as of {}: {}", now, r);
+      f.complete(r);
     } catch (SQLException e) {
-      p.result().completeExceptionally(SqliteFaults.of(file, "pruning", e));
-    } catch (RuntimeException e) {
-      p.result().completeExceptionally(e);
+      f.completeExceptionally(SqliteFaults.of(file, "pruning", e));
+    }
+  }
+
+  private void runBackup(Path target, CompletableFuture<Path> f) {
+    if (conn == null) {
+      f.completeExceptionally(new HistoryException(Problem.IO,
+          "cannot back up: history is not being kept: " + reason));
+      return;
+    }
+    if (Files.exists(target)) {
+      f.completeExceptionally(new HistoryException(Problem.CANNOT_OPEN,
+          "backup target " + target + " exists already"));
+      return;
+    }
+    try (PreparedStatement p = conn.prepareStatement("VACUUM INTO ?")) {
+      p.setString(1, target.toAbsolutePath().toString());
+      p.execute();
+    } catch (SQLException e) {
+      f.completeExceptionally(SqliteFaults.of(target, "backing up " + file, e));
+      return;
+    }
+    try (Connection copy = HistoryDatabase.openReader(target);
+        Statement s = copy.createStatement();
+        ResultSet r = s.executeQuery("PRAGMA integrity_check")) {
+      String verdict = r.next() ? r.getString(1) : "";
+      if ("ok".equals(verdict)) {
+        f.complete(target);
+      } else {
+        f.completeExceptionally(new HistoryException(Problem.CORRUPT,
+            "backup " + target + " fails integrity_check: " + verdict));
+      }
+    } catch (HistoryException e) {
+      f.completeExceptionally(e);
+    } catch (SQLException e) {
+      f.completeExceptionally(SqliteFaults.of(target, "checking the backup", e));
+    }
+  }
+
+  private void checkpoint() {
+    try (Statement s = conn.createStatement()) {
+      s.execute("PRAGMA wal_checkpoint(TRUNCATE)");
+    } catch (SQLException e) {
+      LOG.debug("idle WAL checkpoint did not complete: {}", e.getMessage());
     }
   }
 
   private void shutdown() {
     if (conn != null) {
-      try (Statement s = conn.createStatement()) {
-        s.execute("PRAGMA wal_checkpoint(TRUNCATE)");
-      } catch (SQLException e) {
-        LOG.warn("history checkpoint on close failed: {}", e.getMessage());
-      }
+      checkpoint();
     }
     dropConnection();
     synchronized (progress) {
