@@ -45,6 +45,7 @@ class HistoryFaultTest {
   }
 
   @Test
+  @SuppressWarnings("try") // the protections act by being open
   void aReadOnlyFileIsReportedAndAppendsGoOnWithoutThrowing() throws Exception {
     Path file = dir.resolve("ro.db");
     List<Frame> stored = storeSome(file, 30);
@@ -68,6 +69,7 @@ class HistoryFaultTest {
   }
 
   @Test
+  @SuppressWarnings("try")
   void aReadOnlyFolderIsReportedAndHistoryResumesWithAGapWhenItIsWritableAgain()
       throws Exception {
     Path folder = Files.createDirectory(dir.resolve("data"));

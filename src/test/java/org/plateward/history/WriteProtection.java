@@ -67,9 +67,13 @@ final class WriteProtection implements AutoCloseable {
   }
 
   @Override
-  public void close() throws IOException, InterruptedException {
+  public void close() throws IOException {
     if (immutable) {
-      run("chattr", "-i", path.toString());
+      try {
+        run("chattr", "-i", path.toString());
+      } catch (InterruptedException e) {
+        Thread.currentThread().interrupt();
+      }
     }
     Files.setPosixFilePermissions(path, PosixFilePermissions.fromString(originalPerms));
   }
