@@ -39,6 +39,11 @@ import org.plateward.signals.Signal;
  * them to be committed. At trial setup it also writes one hour of the live pattern — one frame
  * of 17 signals and one estimate with a 60-cell profile per second — and prints the file size
  * scaled to a day.
+ *
+ * <p>Results on the shared 2-core development machine (ext4, sqlite-jdbc 3.54.1.0, JDK 17,
+ * {@code -f 1 -wi 1 -i 3}): about 300,000 values/s (iterations 287k-319k); 97.7 MB per day per
+ * reactor at 1 Hz, of which estimates 59.3 MB and samples 38.6 MB (about 26 bytes a sample,
+ * 690 bytes an estimate).
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.Throughput)
