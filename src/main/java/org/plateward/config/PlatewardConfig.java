@@ -1,6 +1,7 @@
 package org.plateward.config;
 
 import java.nio.file.Path;
+import org.plateward.history.HistorySettings;
 import org.plateward.reactor.UnitSpec;
 
 /**
@@ -15,8 +16,9 @@ import org.plateward.reactor.UnitSpec;
  *
  * @param file the file as the user named it
  * @param unit the reactor unit, SI
+ * @param history how history is kept (the optional {@code [history]} table)
  */
-public record PlatewardConfig(Path file, UnitSpec unit) {
+public record PlatewardConfig(Path file, UnitSpec unit, HistorySettings history) {
   /** The file every command reads unless told otherwise. */
   public static final Path DEFAULT_FILE = Path.of("config", "plateward.toml");
 
@@ -32,7 +34,8 @@ public record PlatewardConfig(Path file, UnitSpec unit) {
     TomlDocument doc = TomlDocument.read(file);
     ErrorList errors = new ErrorList(file);
     UnitSpec unit = UnitConfigLoader.read(doc, errors);
+    HistorySettings history = HistoryConfigReader.read(doc, errors);
     errors.throwIfAny();
-    return new PlatewardConfig(file, unit);
+    return new PlatewardConfig(file, unit, history);
   }
 }
