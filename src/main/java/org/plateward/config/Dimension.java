@@ -50,8 +50,8 @@ public enum Dimension {
   AREAL_MASS("mass per area", "kg/m2", u("kg/m2", 1.0, 0.0, "kg/m²"), u("g/m2", 1e-3, 0.0, "g/m²")),
   HEAT_TRANSFER_COEFFICIENT(
       "heat-transfer coefficient", "W/(m2 K)", u("W/(m2 K)", 1.0, 0.0, "W/m2/K", "W/(m² K)")),
-  /** A time or duration (scenario files). */
-  TIME("time", "s", u("s", 1.0), u("min", 60.0), u("h", 3600.0), u("d", 86400.0)),
+  /** A time or duration (scenario files, OPC UA and history settings). */
+  TIME("time", "s", u("ms", 1e-3), u("s", 1.0), u("min", 60.0), u("h", 3600.0), u("d", 86400.0)),
   /** A fraction written in per cent (scenario magnitudes): "8 %" is 0.08. */
   PERCENT("fraction in per cent", "1", u("%", 0.01));
 

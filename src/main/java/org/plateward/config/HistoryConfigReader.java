@@ -97,20 +97,13 @@ public final class HistoryConfigReader {
       t.error(key, (v.isNumber() ? "needs a unit: " : "") + hint);
       return fallback;
     }
-    BigDecimal n = new BigDecimal(m.group(1));
-    long unitMs = switch (m.group(2)) {
-      case "ms" -> 1L;
-      case "s" -> 1000L;
-      case "min" -> 60_000L;
-      case "h" -> 3_600_000L;
-      case "d" -> 86_400_000L;
-      default -> -1L;
-    };
-    if (unitMs < 0) {
+    long ms;
+    try {
+      ms = Math.round(Quantity.parse(v.asText(), Dimension.TIME).valueSi() * 1000.0);
+    } catch (QuantityFormatException e) {
       t.error(key, "unknown unit \"" + m.group(2) + "\": " + hint);
       return fallback;
     }
-    long ms = n.multiply(BigDecimal.valueOf(unitMs)).longValue();
     if (ms <= 0) {
       t.error(key, "must be positive, got " + t.written(key));
       return fallback;

@@ -97,8 +97,6 @@ public record OpcuaSettings(
           "application_uri", "pki_dir", "namespace", "publishing_interval", "request_timeout",
           "frame_period", "frame_delay", "stale_after", "clock_skew_limit", "auth", "tags");
 
-  private static final Pattern DURATION =
-      Pattern.compile("\\s*([0-9]+(?:\\.[0-9]*)?(?:[eE][-+]?[0-9]+)?)\\s*(ms|s|min)\\s*");
   private static final Pattern NODE_ID =
       Pattern.compile("(?:(?:ns=[0-9]+|nsu=[^;]+);)?(?:i=[0-9]+|s=.+|g=[0-9a-fA-F-]{36}|b=.+)");
 
@@ -330,19 +328,15 @@ public record OpcuaSettings(
     return tags;
   }
 
-  /** Parses a duration written as {@code "<number> ms|s|min"}; seconds, or NaN when malformed. */
+  /** Parses a duration such as {@code "500 ms"}, {@code "1 s"}, {@code "2 min"}; seconds, or NaN when malformed. */
   static double parseDurationS(String text) {
-    Matcher m = DURATION.matcher(text);
-    if (!m.matches()) {
+    try {
+      return Quantity.parse(text, Dimension.TIME).valueSi();
+    } catch (QuantityFormatException e) {
       return Double.NaN;
     }
-    double v = Double.parseDouble(m.group(1));
-    return switch (m.group(2)) {
-      case "ms" -> v / 1000.0;
-      case "min" -> v * 60.0;
-      default -> v;
-    };
   }
+
 
   /** One table of the section, with optional keys and defaults. */
   private static final class Section {
