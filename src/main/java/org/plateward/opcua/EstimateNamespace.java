@@ -5,13 +5,9 @@ import java.util.List;
 import java.util.Map;
 import org.eclipse.milo.opcua.sdk.core.AccessLevel;
 import org.eclipse.milo.opcua.sdk.core.Reference;
-import org.eclipse.milo.opcua.sdk.server.ManagedNamespaceWithLifecycle;
 import org.eclipse.milo.opcua.sdk.server.OpcUaServer;
-import org.eclipse.milo.opcua.sdk.server.items.DataItem;
-import org.eclipse.milo.opcua.sdk.server.items.MonitoredItem;
 import org.eclipse.milo.opcua.sdk.server.nodes.UaFolderNode;
 import org.eclipse.milo.opcua.sdk.server.nodes.UaVariableNode;
-import org.eclipse.milo.opcua.sdk.server.util.SubscriptionModel;
 import org.eclipse.milo.opcua.stack.core.NodeIds;
 import org.eclipse.milo.opcua.stack.core.types.builtin.DataValue;
 import org.eclipse.milo.opcua.stack.core.types.builtin.DateTime;
@@ -27,7 +23,7 @@ import org.plateward.signals.StatusName;
  * advisory caution as the unit folder's description and as its {@code Advisory} property. String
  * NodeIds are {@code <unit>/<quantity>}.
  */
-final class EstimateNamespace extends ManagedNamespaceWithLifecycle {
+final class EstimateNamespace extends SampledNamespace {
   /** Variables of each unit: browse name, data type, description. */
   enum Quantity {
     HIDDEN_PEAK_TEMPERATURE("HiddenPeakTemperature", NodeIds.Double, "hidden peak plate temperature [degC]"),
@@ -54,15 +50,11 @@ final class EstimateNamespace extends ManagedNamespaceWithLifecycle {
   static final String ROOT = "Plateward";
 
   private final List<String> units;
-  private final SubscriptionModel subscriptionModel;
   private final Map<String, UaVariableNode> variables = new HashMap<>();
 
   EstimateNamespace(OpcUaServer server, String namespaceUri, List<String> units) {
     super(server, namespaceUri);
     this.units = List.copyOf(units);
-    this.subscriptionModel = new SubscriptionModel(server, this);
-    getLifecycleManager().addLifecycle(subscriptionModel);
-    getLifecycleManager().addStartupTask(this::createNodes);
   }
 
   static String identifier(String unit, Quantity q) {
@@ -77,7 +69,8 @@ final class EstimateNamespace extends ManagedNamespaceWithLifecycle {
     return variables.get(identifier(unit, q));
   }
 
-  private void createNodes() {
+  @Override
+  protected void createNodes() {
     UaFolderNode root = folder(ROOT, ROOT, "Plateward soft-sensor estimates. " + Advisory.SHORT);
     root.addReference(
         new Reference(root.getNodeId(), NodeIds.Organizes, NodeIds.ObjectsFolder.expanded(), false));
@@ -124,32 +117,4 @@ final class EstimateNamespace extends ManagedNamespaceWithLifecycle {
     }
   }
 
-  private UaFolderNode folder(String id, String name, String description) {
-    UaFolderNode f =
-        new UaFolderNode(
-            getNodeContext(), newNodeId(id), newQualifiedName(name), LocalizedText.english(name));
-    f.setDescription(LocalizedText.english(description));
-    getNodeManager().addNode(f);
-    return f;
-  }
-
-  @Override
-  public void onDataItemsCreated(List<DataItem> dataItems) {
-    subscriptionModel.onDataItemsCreated(dataItems);
-  }
-
-  @Override
-  public void onDataItemsModified(List<DataItem> dataItems) {
-    subscriptionModel.onDataItemsModified(dataItems);
-  }
-
-  @Override
-  public void onDataItemsDeleted(List<DataItem> dataItems) {
-    subscriptionModel.onDataItemsDeleted(dataItems);
-  }
-
-  @Override
-  public void onMonitoringModeChanged(List<MonitoredItem> monitoredItems) {
-    subscriptionModel.onMonitoringModeChanged(monitoredItems);
-  }
 }

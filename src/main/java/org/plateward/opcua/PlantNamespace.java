@@ -6,10 +6,7 @@ import java.util.List;
 import java.util.Map;
 import org.eclipse.milo.opcua.sdk.core.AccessLevel;
 import org.eclipse.milo.opcua.sdk.core.Reference;
-import org.eclipse.milo.opcua.sdk.server.ManagedNamespaceWithLifecycle;
 import org.eclipse.milo.opcua.sdk.server.OpcUaServer;
-import org.eclipse.milo.opcua.sdk.server.items.DataItem;
-import org.eclipse.milo.opcua.sdk.server.items.MonitoredItem;
 import org.eclipse.milo.opcua.sdk.server.nodes.UaFolderNode;
 import org.eclipse.milo.opcua.sdk.server.nodes.UaVariableNode;
 import org.eclipse.milo.opcua.sdk.server.util.SubscriptionModel;
@@ -31,17 +28,13 @@ import org.plateward.signals.StatusName;
  * Monitored items are served by Milo's {@link SubscriptionModel}, which samples the variables at
  * each item's sampling interval.
  */
-final class PlantNamespace extends ManagedNamespaceWithLifecycle {
+final class PlantNamespace extends SampledNamespace {
   private final PlantAddressLayout layout;
-  private final SubscriptionModel subscriptionModel;
   private final Map<Signal, UaVariableNode> variables = new EnumMap<>(Signal.class);
 
   PlantNamespace(OpcUaServer server, String namespaceUri, PlantAddressLayout layout) {
     super(server, namespaceUri);
     this.layout = layout;
-    this.subscriptionModel = new SubscriptionModel(server, this);
-    getLifecycleManager().addLifecycle(subscriptionModel);
-    getLifecycleManager().addStartupTask(this::createNodes);
   }
 
   /** The variable serving this signal; present once the namespace has started. */
@@ -53,8 +46,9 @@ final class PlantNamespace extends ManagedNamespaceWithLifecycle {
     return newNodeId(layout.nodeIdentifier(signal));
   }
 
-  private void createNodes() {
-    UaFolderNode skid = folder(layout.skid(), layout.skid());
+  @Override
+  protected void createNodes() {
+    UaFolderNode skid = folder(layout.skid(), layout.skid(), null);
     skid.addReference(
         new Reference(skid.getNodeId(), NodeIds.Organizes, NodeIds.ObjectsFolder.expanded(), false));
 
@@ -77,7 +71,7 @@ final class PlantNamespace extends ManagedNamespaceWithLifecycle {
             folders.computeIfAbsent(
                 key,
                 k -> {
-                  UaFolderNode f = folder(k, area);
+                  UaFolderNode f = folder(k, area, null);
                   p.addOrganizes(f);
                   return f;
                 });
@@ -103,17 +97,6 @@ final class PlantNamespace extends ManagedNamespaceWithLifecycle {
       node.setEngineeringUnits(engineeringUnits(unit));
       variables.put(signal, node);
     }
-  }
-
-  private UaFolderNode folder(String nodeIdentifier, String browseName) {
-    UaFolderNode f =
-        new UaFolderNode(
-            getNodeContext(),
-            newNodeId(nodeIdentifier),
-            newQualifiedName(browseName),
-            LocalizedText.english(browseName));
-    getNodeManager().addNode(f);
-    return f;
   }
 
   /**
@@ -156,25 +139,5 @@ final class PlantNamespace extends ManagedNamespaceWithLifecycle {
         unitId,
         LocalizedText.english(unit.label()),
         LocalizedText.english(description));
-  }
-
-  @Override
-  public void onDataItemsCreated(List<DataItem> dataItems) {
-    subscriptionModel.onDataItemsCreated(dataItems);
-  }
-
-  @Override
-  public void onDataItemsModified(List<DataItem> dataItems) {
-    subscriptionModel.onDataItemsModified(dataItems);
-  }
-
-  @Override
-  public void onDataItemsDeleted(List<DataItem> dataItems) {
-    subscriptionModel.onDataItemsDeleted(dataItems);
-  }
-
-  @Override
-  public void onMonitoringModeChanged(List<MonitoredItem> monitoredItems) {
-    subscriptionModel.onMonitoringModeChanged(monitoredItems);
   }
 }
