@@ -49,7 +49,11 @@ public enum Dimension {
   LATENT_HEAT("specific latent heat", "J/kg", u("J/kg", 1.0), u("kJ/kg", 1000.0)),
   AREAL_MASS("mass per area", "kg/m2", u("kg/m2", 1.0, 0.0, "kg/m²"), u("g/m2", 1e-3, 0.0, "g/m²")),
   HEAT_TRANSFER_COEFFICIENT(
-      "heat-transfer coefficient", "W/(m2 K)", u("W/(m2 K)", 1.0, 0.0, "W/m2/K", "W/(m² K)"));
+      "heat-transfer coefficient", "W/(m2 K)", u("W/(m2 K)", 1.0, 0.0, "W/m2/K", "W/(m² K)")),
+  /** A time or duration (scenario files). */
+  TIME("time", "s", u("s", 1.0), u("min", 60.0), u("h", 3600.0), u("d", 86400.0)),
+  /** A fraction written in per cent (scenario magnitudes): "8 %" is 0.08. */
+  PERCENT("fraction in per cent", "1", u("%", 0.01));
 
   /** One accepted unit: its symbol, aliases and the affine map to SI. */
   public record UnitOfMeasure(String symbol, double scale, double offset, List<String> aliases) {

@@ -53,6 +53,26 @@ final class TableReader {
     return new TableReader(doc, errors, name, n);
   }
 
+  /**
+   * A reader over one element of an array of tables ({@code [[event]]}), named by its dotted
+   * path with index, e.g. {@code event[2]}; its keys are reported as {@code event[2].kind}.
+   */
+  static TableReader element(TomlDocument doc, ErrorList errors, String path, JsonNode node) {
+    return new TableReader(doc, errors, path, node);
+  }
+
+  /** Whether an optional key is present (and marks it as known). */
+  boolean has(String key) {
+    known.add(key);
+    return node != null && node.get(key) != null;
+  }
+
+  /** The raw node of a key (marks it as known); null when absent. */
+  JsonNode raw(String key) {
+    known.add(key);
+    return node == null ? null : node.get(key);
+  }
+
   boolean present() {
     return node != null;
   }

@@ -154,6 +154,18 @@ public final class PlantEndpoint implements AutoCloseable {
    * @param frame values in SI
    */
   public void publish(Frame frame) {
+    publish(frame, Set.of());
+  }
+
+  /**
+   * Like {@link #publish(Frame)}, except that the signals in {@code hold} keep the DataValue
+   * they have (value, StatusCode and SourceTimestamp): a sampling instrument, such as the
+   * composition analyzer between two results, has nothing new to report.
+   *
+   * @param frame values in SI
+   * @param hold signals left unchanged in this frame
+   */
+  public void publish(Frame frame, Set<Signal> hold) {
     DateTime source = new DateTime(frame.time());
     synchronized (publishLock) {
       if (closed) {
@@ -161,6 +173,9 @@ public final class PlantEndpoint implements AutoCloseable {
       }
       DateTime serverTime = DateTime.now();
       for (Signal s : Signal.values()) {
+        if (hold.contains(s)) {
+          continue;
+        }
         int i = s.ordinal();
         double si = frame.valueSi(s);
         Quality q = frame.quality(s);
