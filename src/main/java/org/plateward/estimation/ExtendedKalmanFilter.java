@@ -25,7 +25,7 @@ public final class ExtendedKalmanFilter {
   private final Dynamics dynamics;
   private final FilterSettings settings;
   private final int n;
-  private final double[][] processNoiseDensity;
+  private double[][] processNoiseDensity;
 
   private final double[] x;
   private double[][] p;
@@ -747,6 +747,17 @@ public final class ExtendedKalmanFilter {
         p[targets[i]][targets[k]] = 0.5 * (hph[i][k] + hph[k][i]) + (i == k ? jitterVariance : 0.0);
       }
     }
+  }
+
+  /**
+   * Replaces the continuous process noise density Q for the propagations that follow (for a
+   * model whose input-noise mapping B Σ Bᵀ moves with the operating point).
+   *
+   * @param q n×n (state units²/s), symmetric positive semi-definite
+   */
+  public void setProcessNoiseDensity(double[][] q) {
+    Matrices.requireShape(q, n, n, "Q");
+    processNoiseDensity = Matrices.copy(q);
   }
 
   /** Number of times Φ was formed for a held Jacobian (a measure of the refresh rate). */

@@ -27,6 +27,8 @@ import java.time.Instant;
  * @param combustionActivitySd its standard deviation
  * @param heatLossWPerM2K estimated heat-loss coefficient, W/(m2 K)
  * @param heatLossSdWPerM2K its standard deviation
+ * @param heatTransferMultiplier estimated multiplier on the gas-wall heat-transfer coefficients
+ * @param heatTransferMultiplierSd its standard deviation
  * @param biasInletK estimated bias of the plate-end thermocouple at z = 0, K
  * @param biasOutletK estimated bias of the plate-end thermocouple at z = L, K
  * @param cellMeltFraction melt fraction of each cell (copy)
@@ -52,6 +54,8 @@ public record Estimate(
     double combustionActivitySd,
     double heatLossWPerM2K,
     double heatLossSdWPerM2K,
+    double heatTransferMultiplier,
+    double heatTransferMultiplierSd,
     double biasInletK,
     double biasOutletK,
     double[] cellMeltFraction) {

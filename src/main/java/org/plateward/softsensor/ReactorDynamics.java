@@ -37,7 +37,6 @@ public final class ReactorDynamics implements Dynamics {
   private final int cells;
   private final double capacity;
   private final double[] lagS;
-  private final double heatTransferMultiplier;
   private final double refreshS;
   private final double refreshK;
 
@@ -54,7 +53,7 @@ public final class ReactorDynamics implements Dynamics {
   private final double[] refTempK;
   private final boolean[] refInBand;
   private final double[] refU = new double[8];
-  private final double[] refP = new double[3];
+  private final double[] refP = new double[4];
   private long version = -1;
   private double sinceRefreshS;
   private double lastStepS = 1.0;
@@ -77,7 +76,6 @@ public final class ReactorDynamics implements Dynamics {
     this.cells = model.cells();
     this.capacity = model.plate().sensibleJPerM2K();
     this.lagS = lagS.clone();
-    this.heatTransferMultiplier = 1.0;
     this.refreshS = refreshS;
     this.refreshK = refreshK;
     e = new double[cells];
@@ -121,7 +119,7 @@ public final class ReactorDynamics implements Dynamics {
   /** Model parameters held in the state x. */
   public ModelParameters parameters(double[] x) {
     return new ModelParameters(
-        x[layout.reformingActivity()], x[layout.combustionActivity()], x[layout.heatLoss()], heatTransferMultiplier);
+        x[layout.reformingActivity()], x[layout.combustionActivity()], x[layout.heatLoss()], x[layout.heatTransfer()]);
   }
 
   /** Areal enthalpy of cell j in state x, J/m2. */
@@ -210,8 +208,8 @@ public final class ReactorDynamics implements Dynamics {
       }
     }
     ModelParameters p = parameters(x);
-    double[] pv = {p.reformingActivity(), p.combustionActivity(), p.heatLossCoefficientWPerM2K()};
-    for (int i = 0; i < 3; i++) {
+    double[] pv = {p.reformingActivity(), p.combustionActivity(), p.heatLossCoefficientWPerM2K(), p.heatTransferMultiplier()};
+    for (int i = 0; i < 4; i++) {
       if (Math.abs(pv[i] - refP[i]) > 0.02 * Math.abs(refP[i])) {
         return true;
       }
@@ -243,14 +241,15 @@ public final class ReactorDynamics implements Dynamics {
       }
     }
     // parameter columns by one-sided differences (one evaluation each)
-    int[] pIdx = {layout.reformingActivity(), layout.combustionActivity(), layout.heatLoss()};
-    for (int q = 0; q < 3; q++) {
+    int[] pIdx = {layout.reformingActivity(), layout.combustionActivity(), layout.heatLoss(), layout.heatTransfer()};
+    for (int q = 0; q < 4; q++) {
       double v = x[pIdx[q]];
       double step = 1e-4 * Math.max(Math.abs(v), 1e-2);
       ModelParameters pp = switch (q) {
         case 0 -> p.withReformingActivity(v + step);
         case 1 -> p.withCombustionActivity(v + step);
-        default -> p.withHeatLoss(v + step);
+        case 2 -> p.withHeatLoss(v + step);
+        default -> p.withHeatTransferMultiplier(v + step);
       };
       model.evaluate(e, op, pp, scratch);
       for (int k = 0; k < cells; k++) {
@@ -278,6 +277,7 @@ public final class ReactorDynamics implements Dynamics {
     refP[0] = p.reformingActivity();
     refP[1] = p.combustionActivity();
     refP[2] = p.heatLossCoefficientWPerM2K();
+    refP[3] = p.heatTransferMultiplier();
     sinceRefreshS = 0.0;
     version = ++builds;
   }

@@ -46,7 +46,7 @@ public final class ReactorSoftSensor {
     Signal.REF_OUTLET_CH4, Signal.REF_OUTLET_CO, Signal.REF_OUTLET_CO2, Signal.REF_OUTLET_H2,
     Signal.COMB_OUTLET_O2
   };
-  private static final int SLOTS = 3;
+  private static final int SLOTS = 2;
 
   private final UnitSpec spec;
   private final SoftSensorSettings settings;
@@ -261,7 +261,7 @@ public final class ReactorSoftSensor {
     double nan = Double.NaN;
     return new Estimate(time, nan, nan, nan, nan, nan, nan, nan, nan, nan, nan, 0,
         EstimatorStatus.UNTRUSTWORTHY, "waiting for every input to have a usable value",
-        nan, nan, nan, nan, nan, nan, nan, nan, new double[0]);
+        nan, nan, nan, nan, nan, nan, nan, nan, nan, nan, new double[0]);
   }
 
   private static double seconds(Instant t) {
@@ -270,7 +270,7 @@ public final class ReactorSoftSensor {
 
   private void start(double tS) {
     double[] u = lastGoodInput.clone();
-    ModelParameters p = ModelParameters.nominal(spec);
+    ModelParameters p = ModelParameters.nominal(spec).withHeatTransferMultiplier(settings.heatTransferPrior());
     double[] e = new double[cells];
     model.uniformState(SteadySummary.HOT_START_K, e);
     e = new SteadyStateSolver(model).solve(ReactorDynamics.operatingPoint(u), p, e).enthalpyJPerM2();
@@ -281,6 +281,7 @@ public final class ReactorSoftSensor {
     x[layout.reformingActivity()] = p.reformingActivity();
     x[layout.combustionActivity()] = p.combustionActivity();
     x[layout.heatLoss()] = p.heatLossCoefficientWPerM2K();
+    x[layout.heatTransfer()] = p.heatTransferMultiplier();
     dynamics.evaluateModel(x, u, ev);
     int[] lagOut = {ModelOutputs.REF_OUTLET_TEMP_K, ModelOutputs.COMB_OUTLET_TEMP_K,
         ModelOutputs.PLATE_END_INLET_K, ModelOutputs.PLATE_END_OUTLET_K};
@@ -299,6 +300,7 @@ public final class ReactorSoftSensor {
     p0[layout.reformingActivity()][layout.reformingActivity()] = sq(0.15 * p.reformingActivity());
     p0[layout.combustionActivity()][layout.combustionActivity()] = sq(0.15 * p.combustionActivity());
     p0[layout.heatLoss()][layout.heatLoss()] = sq(0.5 * p.heatLossCoefficientWPerM2K());
+    p0[layout.heatTransfer()][layout.heatTransfer()] = sq(settings.heatTransferPriorSd());
     p0[layout.bias(0)][layout.bias(0)] = sq(3.0);
     p0[layout.bias(1)][layout.bias(1)] = sq(3.0);
     for (int k = 0; k < 4; k++) {
@@ -329,7 +331,10 @@ public final class ReactorSoftSensor {
     for (int a = 0; a < in.length; a++) {
       int i = in[a];
       double sd = (i == 2 || i == 6) ? settings.inputTempNoiseK() : settings.inputNoiseRelative() * Math.abs(u[i]);
-      double density = sd * sd * 1.0;
+      double bias = (i == 2 || i == 6) ? settings.inputBiasTempK() : settings.inputBiasRelative() * Math.abs(u[i]);
+      // white noise sampled at 1 s: σ²·1 s; a first-order Gauss-Markov error of σ_b and
+      // correlation time τ has the low-frequency spectral density 2 σ_b² τ
+      double density = sd * sd * 1.0 + 2.0 * bias * bias * settings.inputBiasTimeS();
       for (int r = 0; r < cells; r++) {
         for (int c = 0; c < cells; c++) {
           q[r][c] += b[a][r] * b[a][c] * density;
@@ -345,6 +350,7 @@ public final class ReactorSoftSensor {
         sq(settings.activityDriftPerHour() * p.combustionActivity()) / 3600.0;
     q[layout.heatLoss()][layout.heatLoss()] =
         sq(settings.heatLossDriftPerHour() * p.heatLossCoefficientWPerM2K()) / 3600.0;
+    q[layout.heatTransfer()][layout.heatTransfer()] = sq(settings.heatTransferDriftPerHour()) / 3600.0;
     for (int end = 0; end < 2; end++) {
       q[layout.bias(end)][layout.bias(end)] = sq(settings.biasDriftKPerHour()) / 3600.0;
     }
@@ -375,11 +381,16 @@ public final class ReactorSoftSensor {
     double dt = tS - lastEpochS;
     double[] before = ekf.state();
     dynamics.stepLengthS(Math.min(dt, settings.blockS()));
+    long buildsBefore = dynamics.builds();
     ekf.propagate(u, dt);
     double[] prior = ekf.state();
+    if (dynamics.builds() != buildsBefore) {
+      ekf.setProcessNoiseDensity(processNoise(prior, u, dynamics.parameters(prior)));
+    }
     for (int i = 0; i < n; i++) {
       rate[i] = (prior[i] - before[i]) / dt;
     }
+    applyPublications(tS, u);
     captureDueClones(tS, u);
     // frame-rate sensors: block means, R = σ²/k + floor²
     double[] z = new double[4];
@@ -409,7 +420,6 @@ public final class ReactorSoftSensor {
       }
     }
     handleDrift(res.driftAlarms(), tS);
-    applyPublications(tS, u);
     if (!Double.isNaN(analyzerPhaseS) && tS - lastAnalyzerUpdateS > 2 * settings.analyzerPeriodS() + settings.analyzerDeadTimeS()) {
       status = status.worst(EstimatorStatus.DEGRADED);
       append(reason, "analyzer results missing since " + (long) (tS - lastAnalyzerUpdateS) + " s");
@@ -573,6 +583,7 @@ public final class ReactorSoftSensor {
         last.bufferMeltFractionSd(), last.maxCellMeltFraction(), last.remainingLatentJ(), tte, last.timeToExhaustSdS(),
         last.nis(), last.nisDof(), last.status(), last.reason(), last.reformingActivity(), last.reformingActivitySd(),
         last.combustionActivity(), last.combustionActivitySd(), last.heatLossWPerM2K(), last.heatLossSdWPerM2K(),
+        last.heatTransferMultiplier(), last.heatTransferMultiplierSd(),
         last.biasInletK(), last.biasOutletK(), last.cellMeltFraction());
   }
 
@@ -648,6 +659,7 @@ public final class ReactorSoftSensor {
     return new Estimate(time, pk.tempK(), Math.sqrt(Math.max(var, 0.0)), pk.positionM(), overall,
         Math.sqrt(Math.max(mvar, 0.0)), maxMelt, latentLeft, tte, tteSd, lastNis, lastNisDof, status, reason,
         x[ra], Math.sqrt(p[ra][ra]), x[ca], Math.sqrt(p[ca][ca]), x[hl], Math.sqrt(p[hl][hl]),
+        x[layout.heatTransfer()], Math.sqrt(p[layout.heatTransfer()][layout.heatTransfer()]),
         x[layout.bias(0)], x[layout.bias(1)], melt);
   }
 

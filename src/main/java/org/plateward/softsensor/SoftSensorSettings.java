@@ -18,6 +18,10 @@ package org.plateward.softsensor;
  * @param analyzerDeadTimeS time from drawing a sample to publishing its result (s)
  * @param inputNoiseRelative flow meter noise, relative, 1σ per frame
  * @param inputTempNoiseK inlet thermocouple noise, 1σ per frame (K)
+ * @param inputBiasRelative slowly wandering systematic error of the flow meters (accuracy),
+ *     relative, 1σ
+ * @param inputBiasTempK the same for the inlet thermocouples (K)
+ * @param inputBiasTimeS correlation time of those systematic errors (s)
  * @param cellNoiseK2PerS structural process noise density per cell (K²/s)
  * @param activityDriftPerHour 1σ random-walk drift of each catalyst activity over one hour,
  *     relative
@@ -25,6 +29,9 @@ package org.plateward.softsensor;
  *     relative
  * @param biasDriftKPerHour 1σ random-walk drift of a healthy plate-end thermocouple (K over one
  *     hour)
+ * @param heatTransferPrior prior mean of the heat-transfer multiplier
+ * @param heatTransferPriorSd its prior standard deviation
+ * @param heatTransferDriftPerHour 1σ random-walk drift of the multiplier over one hour
  * @param horizonS time-to-exhaust forecast horizon (s)
  * @param forecastEveryS how often the time-to-exhaust forecast is recomputed (s)
  * @param startupS time after start during which the estimate is reported as settling (s)
@@ -42,10 +49,16 @@ public record SoftSensorSettings(
     double analyzerDeadTimeS,
     double inputNoiseRelative,
     double inputTempNoiseK,
+    double inputBiasRelative,
+    double inputBiasTempK,
+    double inputBiasTimeS,
     double cellNoiseK2PerS,
     double activityDriftPerHour,
     double heatLossDriftPerHour,
     double biasDriftKPerHour,
+    double heatTransferPrior,
+    double heatTransferPriorSd,
+    double heatTransferDriftPerHour,
     double horizonS,
     double forecastEveryS,
     double startupS) {
@@ -61,19 +74,30 @@ public record SoftSensorSettings(
     }
   }
 
+  /**
+   * Prior mean of the heat-transfer multiplier: the model uses Nu = 7.541 (uniform wall
+   * temperature); a real wall lies between that and 8.235 (uniform heat flux, Shah and London
+   * 1978), so the prior is the midpoint of the two limits over 7.541.
+   */
+  public static final double HEAT_TRANSFER_PRIOR = 0.5 * (7.541 + 8.235) / 7.541;
+  /** Prior σ: a quarter of the range between the two limits, so ±2σ spans it. */
+  public static final double HEAT_TRANSFER_PRIOR_SD = 0.25 * (8.235 - 7.541) / 7.541;
+
   /** The defaults for the demo unit's instrument set (see the package documentation). */
   public static SoftSensorSettings defaults() {
     return new SoftSensorSettings(
         5.0, 60.0, 3.0,
         new double[] {10.0, 10.0, 15.0, 15.0},
         new double[] {1.5, 1.5, 1.0, 1.0},
-        new double[] {2.0, 2.0, 1.5, 1.5},
+        new double[] {0.5, 0.5, 0.5, 0.5},
         new double[] {0.1, 0.15, 0.1, 0.2, 0.05},
-        new double[] {0.2, 0.2, 0.2, 0.4, 0.1},
+        new double[] {0.1, 0.1, 0.1, 0.2, 0.05},
         30.0, 60.0,
         0.005, 1.0,
+        0.005, 1.0, 300.0,
         2e-3,
         0.05, 0.2, 2.0,
+        HEAT_TRANSFER_PRIOR, HEAT_TRANSFER_PRIOR_SD, 0.01,
         1800.0, 30.0, 600.0);
   }
 
@@ -81,15 +105,17 @@ public record SoftSensorSettings(
   public SoftSensorSettings withBlockS(double v) {
     return new SoftSensorSettings(v, jacobianRefreshS, jacobianRefreshK, lagS, temperatureNoiseK,
         temperatureFloorK, analyzerNoiseMolPct, analyzerFloorMolPct, analyzerPeriodS, analyzerDeadTimeS,
-        inputNoiseRelative, inputTempNoiseK, cellNoiseK2PerS, activityDriftPerHour, heatLossDriftPerHour,
-        biasDriftKPerHour, horizonS, forecastEveryS, startupS);
+        inputNoiseRelative, inputTempNoiseK, inputBiasRelative, inputBiasTempK, inputBiasTimeS, cellNoiseK2PerS, activityDriftPerHour, heatLossDriftPerHour,
+        biasDriftKPerHour, heatTransferPrior, heatTransferPriorSd, heatTransferDriftPerHour, horizonS, forecastEveryS,
+        startupS);
   }
 
   /** Copy with another analyzer schedule (s). */
   public SoftSensorSettings withAnalyzer(double periodS, double deadTimeS) {
     return new SoftSensorSettings(blockS, jacobianRefreshS, jacobianRefreshK, lagS, temperatureNoiseK,
         temperatureFloorK, analyzerNoiseMolPct, analyzerFloorMolPct, periodS, deadTimeS,
-        inputNoiseRelative, inputTempNoiseK, cellNoiseK2PerS, activityDriftPerHour, heatLossDriftPerHour,
-        biasDriftKPerHour, horizonS, forecastEveryS, startupS);
+        inputNoiseRelative, inputTempNoiseK, inputBiasRelative, inputBiasTempK, inputBiasTimeS, cellNoiseK2PerS, activityDriftPerHour, heatLossDriftPerHour,
+        biasDriftKPerHour, heatTransferPrior, heatTransferPriorSd, heatTransferDriftPerHour, horizonS, forecastEveryS,
+        startupS);
   }
 }

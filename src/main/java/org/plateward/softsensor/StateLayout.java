@@ -9,10 +9,11 @@ package org.plateward.softsensor;
  *   N                 reforming activity (multiplier on the Xu-Froment rates)
  *   N+1               combustion activity (multiplier on the surface rate constant)
  *   N+2               heat-loss coefficient, W/(m2 K)
- *   N+3, N+4          bias of the plate-end thermocouples at z = 0 and z = L, K
- *   N+5 .. N+8        first-order sensor lags: reformed gas outlet, flue gas outlet, plate end
+ *   N+3               gas-wall heat-transfer multiplier (on the Nusselt number)
+ *   N+4, N+5          bias of the plate-end thermocouples at z = 0 and z = L, K
+ *   N+6 .. N+9        first-order sensor lags: reformed gas outlet, flue gas outlet, plate end
  *                     z = 0, plate end z = L, K
- *   N+9 ..            analyzer clones: {@link #cloneSlots()} slots of five dry mole fractions
+ *   N+10 ..            analyzer clones: {@link #cloneSlots()} slots of five dry mole fractions
  *                     (mol%), held from the time a sample is drawn until its result is published
  * </pre>
  */
@@ -22,7 +23,7 @@ public final class StateLayout {
   /** Number of lagged temperature sensors. */
   public static final int LAGS = 4;
   /** Number of augmented parameters (activities and heat loss). */
-  public static final int PARAMETERS = 3;
+  public static final int PARAMETERS = 4;
 
   private final int cells;
   private final int slots;
@@ -56,23 +57,27 @@ public final class StateLayout {
     return cells + 2;
   }
 
+  public int heatTransfer() {
+    return cells + 3;
+  }
+
   /** Bias state of plate-end thermocouple {@code end} (0: z = 0, 1: z = L). */
   public int bias(int end) {
-    return cells + 3 + end;
+    return cells + 4 + end;
   }
 
   /** Lag state {@code k} (0 reformed gas outlet, 1 flue gas outlet, 2 plate end z=0, 3 z=L). */
   public int lag(int k) {
-    return cells + 5 + k;
+    return cells + 6 + k;
   }
 
   /** First state of clone slot {@code s}. */
   public int clone(int s) {
-    return cells + 5 + LAGS + s * ANALYZER_CHANNELS;
+    return cells + 6 + LAGS + s * ANALYZER_CHANNELS;
   }
 
   /** Total state size n. */
   public int size() {
-    return cells + 5 + LAGS + slots * ANALYZER_CHANNELS;
+    return cells + 6 + LAGS + slots * ANALYZER_CHANNELS;
   }
 }
