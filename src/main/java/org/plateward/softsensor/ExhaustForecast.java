@@ -14,9 +14,14 @@ import org.plateward.reactor.PlateReactorModel;
 /**
  * Open-loop forecast of the time until the buffer layer of some cell is fully melted, from a
  * plate state with the present inputs and parameters held. Linearly implicit (Rosenbrock-Euler)
- * steps with a held cell Jacobian J: e ← e + (I − hJ)⁻¹ h f(e); steps of 10 s over the first
- * 600 s, 30 s after; the crossing of e_k through the fully-melted enthalpy is interpolated
- * linearly inside the step where it happens.
+ * steps e ← e + (I − hJ)⁻¹ h f(e), steps of 10 s over the first 600 s and 30 s after; the
+ * crossing of e_k through the fully-melted enthalpy is interpolated linearly inside the step.
+ *
+ * <p>J is the filter's held Jacobian with each column j rescaled by s_j(e)/s_j(e₀), the slope
+ * dT/de of cell j now over its slope at the start: the plate couples to its neighbours and the
+ * gases through its temperature only, so ∂f/∂e_j = ∂f/∂T_j · dT/de_j. Without this, a
+ * Jacobian taken below the melting band damps the enthalpy rise of a melting cell (where dT/de
+ * is about 60 times smaller) and the forecast runs far too slow.
  */
 public final class ExhaustForecast {
   private static final double FINE_STEP_S = 10.0;
@@ -27,8 +32,11 @@ public final class ExhaustForecast {
   private final ModelEvaluation ev;
   private final int n;
   private final double meltEnd;
-  private DecompositionSolver fine;
-  private DecompositionSolver coarse;
+  private double[][] jRef;
+  private double[] slopeRef;
+  private double[] cachedRatio;
+  private double cachedStepS;
+  private DecompositionSolver cachedSolver;
   private int lastCell = -1;
 
   public ExhaustForecast(PlateReactorModel model) {
@@ -38,20 +46,52 @@ public final class ExhaustForecast {
     this.meltEnd = model.plate().meltEndJPerM2();
   }
 
-  /** Prepares the implicit steps from the cell block of df/de (1/s), N×N. */
-  public void setJacobian(double[][] dfde) {
-    fine = solver(dfde, FINE_STEP_S);
-    coarse = solver(dfde, COARSE_STEP_S);
+  /**
+   * Sets the cell block of df/de (1/s), N×N, and the state it belongs to.
+   *
+   * @param dfde the Jacobian (copied)
+   * @param e0 plate enthalpy per cell at which it holds, J/m2
+   */
+  public void setJacobian(double[][] dfde, double[] e0) {
+    jRef = new double[n][];
+    for (int r = 0; r < n; r++) {
+      jRef[r] = dfde[r].clone();
+    }
+    cachedRatio = null;
+    slopeRef = new double[n];
+    for (int j = 0; j < n; j++) {
+      slopeRef[j] = slope(e0[j]);
+    }
   }
 
-  private DecompositionSolver solver(double[][] j, double h) {
+  private double slope(double e) {
+    double d = 0.2 * model.plate().sensibleJPerM2K(); // 0.2 K of sensible heat
+    PlateEnthalpy pl = model.plate();
+    return (pl.tempK(e + d) - pl.tempK(e - d)) / (2 * d);
+  }
+
+  private DecompositionSolver solver(double[] e, double h) {
+    double[] ratio = new double[n];
+    boolean same = cachedRatio != null && cachedStepS == h;
+    for (int j = 0; j < n; j++) {
+      ratio[j] = slopeRef[j] > 0 ? slope(e[j]) / slopeRef[j] : 1.0;
+      if (same && Math.abs(ratio[j] - cachedRatio[j]) > 0.1 * Math.max(ratio[j], cachedRatio[j])) {
+        same = false;
+      }
+    }
+    if (same) {
+      return cachedSolver; // the columns moved by less than 10 %: the factors still serve
+    }
+    cachedRatio = ratio;
+    cachedStepS = h;
     RealMatrix a = new Array2DRowRealMatrix(n, n);
     for (int r = 0; r < n; r++) {
       for (int c = 0; c < n; c++) {
-        a.setEntry(r, c, (r == c ? 1.0 : 0.0) - h * j[r][c]);
+        a.setEntry(r, c, (r == c ? 1.0 : 0.0) - h * jRef[r][c] * ratio[c]);
       }
     }
-    return new LUDecomposition(a).getSolver();
+    cachedSolver = new LUDecomposition(a).getSolver();
+    return cachedSolver;
   }
 
   /**
@@ -63,7 +103,7 @@ public final class ExhaustForecast {
    * @param horizonS forecast horizon, s
    */
   public double secondsToExhaust(double[] e0, OperatingPoint u, ModelParameters p, double horizonS) {
-    if (fine == null) {
+    if (jRef == null) {
       throw new IllegalStateException("setJacobian first");
     }
     double[] e = e0.clone();
@@ -82,7 +122,7 @@ public final class ExhaustForecast {
       for (int j = 0; j < n; j++) {
         rhs.setEntry(j, h * ev.enthalpyRateWPerM2(j));
       }
-      double[] d = (isFine ? fine : coarse).solve(rhs).toArray();
+      double[] d = solver(e, h).solve(rhs).toArray();
       double best = Double.POSITIVE_INFINITY;
       int cell = -1;
       for (int j = 0; j < n; j++) {

@@ -89,6 +89,7 @@ public final class ReactorSoftSensor {
   private final boolean[] excluded = new boolean[4];
   private final String[] exclusionReason = new String[4];
   private final List<DriftAlarm> driftFlags = new ArrayList<>();
+  private final BiasRateMonitor[] biasMonitors = new BiasRateMonitor[2];
   private long repairsSeen;
   private double lastNis = Double.NaN;
   private int lastNisDof;
@@ -143,6 +144,9 @@ public final class ReactorSoftSensor {
     analyzerModel = new AnalyzerPrediction();
     forecast = new ExhaustForecast(model);
     Arrays.fill(slotSampleS, Double.NaN);
+    for (int end = 0; end < 2; end++) {
+      biasMonitors[end] = new BiasRateMonitor(settings.driftWindowS(), settings.biasDriftKPerHour(), 4.0);
+    }
   }
 
   /** The augmented state layout. */
@@ -180,7 +184,10 @@ public final class ReactorSoftSensor {
     return droppedAnalyzer;
   }
 
-  /** Drift alarms raised so far (channel index into the frame-rate set: 0..3). */
+  /**
+   * Drift flags raised so far (channel index into the frame-rate set: 0..3; {@code raisedAtTimeS}
+   * in epoch seconds).
+   */
   public List<DriftAlarm> driftFlags() {
     return List.copyOf(driftFlags);
   }
@@ -420,6 +427,20 @@ public final class ReactorSoftSensor {
       }
     }
     handleDrift(res.driftAlarms(), tS);
+    double[] post = ekf.state();
+    for (int end = 0; end < 2; end++) {
+      int k = 2 + end;
+      if (!excluded[k] && biasMonitors[end].add(tS, post[layout.bias(end)])) {
+        excluded[k] = true;
+        driftFlags.add(new DriftAlarm(k, biasMonitors[end].changeK() > 0 ? 1 : -1,
+            tS - settings.driftWindowS(), tS));
+        exclusionReason[k] = String.format(java.util.Locale.ROOT,
+            "%s drifting: its bias moved %+.1f K in %.0f min (healthy drift allows %.1f K): excluded",
+            FAST[k].id(), biasMonitors[end].changeK(), settings.driftWindowS() / 60.0, biasMonitors[end].thresholdK());
+        append(reason, exclusionReason[k]);
+        status = status.worst(EstimatorStatus.DEGRADED);
+      }
+    }
     if (!Double.isNaN(analyzerPhaseS) && tS - lastAnalyzerUpdateS > 2 * settings.analyzerPeriodS() + settings.analyzerDeadTimeS()) {
       status = status.worst(EstimatorStatus.DEGRADED);
       append(reason, "analyzer results missing since " + (long) (tS - lastAnalyzerUpdateS) + " s");
@@ -597,20 +618,25 @@ public final class ReactorSoftSensor {
       melt[j] = plate.meltFraction(x[j] * capacity);
     }
     HiddenPeak pk = HiddenPeak.of(grid, tK);
-    // σ of the peak: gradient of the parabolic reconstruction over its three cells
+    // σ of the peak: gradient of the parabolic reconstruction over its three cells with respect
+    // to their temperatures (central differences, 0.01 K), times the secant slope dT/dx of each
+    // cell over ±1σ (statistical linearisation: on the melting plateau T barely moves with x)
     int c = pk.cell();
     int lo = Math.max(0, c - 1);
     int hi = Math.min(cells - 1, c + 1);
     double[] g = new double[hi - lo + 1];
     double[] tPert = tK.clone();
     for (int j = lo; j <= hi; j++) {
-      double d = 0.05;
-      tPert[j] = plate.tempK((x[j] + d) * capacity);
+      double d = 0.01;
+      tPert[j] = tK[j] + d;
       double up = HiddenPeak.of(grid, tPert).tempK();
-      tPert[j] = plate.tempK((x[j] - d) * capacity);
+      tPert[j] = tK[j] - d;
       double dn = HiddenPeak.of(grid, tPert).tempK();
       tPert[j] = tK[j];
-      g[j - lo] = (up - dn) / (2 * d);
+      double dPeakDt = Math.max(-1.0, Math.min(2.0, (up - dn) / (2 * d)));
+      double sdj = Math.sqrt(Math.max(p[j][j], 1e-12));
+      double dTdx = (plate.tempK((x[j] + sdj) * capacity) - plate.tempK((x[j] - sdj) * capacity)) / (2 * sdj);
+      g[j - lo] = dPeakDt * dTdx;
     }
     double var = 0.0;
     for (int a = lo; a <= hi; a++) {
@@ -688,7 +714,7 @@ public final class ReactorSoftSensor {
     for (int i = 0; i < cells; i++) {
       System.arraycopy(jac[i], 0, jc[i], 0, cells);
     }
-    forecast.setJacobian(jc);
+    forecast.setJacobian(jc, enthalpies(x, null, 0));
     double[] u = lastGoodInputOrBlock();
     OperatingPoint op = ReactorDynamics.operatingPoint(u);
     double mean = forecast.secondsToExhaust(enthalpies(x, null, 0), op, dynamics.parameters(x), settings.horizonS());

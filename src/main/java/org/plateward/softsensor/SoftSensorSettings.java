@@ -32,6 +32,7 @@ package org.plateward.softsensor;
  * @param heatTransferPrior prior mean of the heat-transfer multiplier
  * @param heatTransferPriorSd its prior standard deviation
  * @param heatTransferDriftPerHour 1σ random-walk drift of the multiplier over one hour
+ * @param driftWindowS window of the thermocouple bias-rate test (s)
  * @param horizonS time-to-exhaust forecast horizon (s)
  * @param forecastEveryS how often the time-to-exhaust forecast is recomputed (s)
  * @param startupS time after start during which the estimate is reported as settling (s)
@@ -59,6 +60,7 @@ public record SoftSensorSettings(
     double heatTransferPrior,
     double heatTransferPriorSd,
     double heatTransferDriftPerHour,
+    double driftWindowS,
     double horizonS,
     double forecastEveryS,
     double startupS) {
@@ -97,7 +99,7 @@ public record SoftSensorSettings(
         0.005, 1.0, 300.0,
         2e-3,
         0.05, 0.2, 2.0,
-        HEAT_TRANSFER_PRIOR, HEAT_TRANSFER_PRIOR_SD, 0.01,
+        HEAT_TRANSFER_PRIOR, HEAT_TRANSFER_PRIOR_SD, 0.01, 600.0,
         1800.0, 30.0, 600.0);
   }
 
@@ -106,7 +108,7 @@ public record SoftSensorSettings(
     return new SoftSensorSettings(v, jacobianRefreshS, jacobianRefreshK, lagS, temperatureNoiseK,
         temperatureFloorK, analyzerNoiseMolPct, analyzerFloorMolPct, analyzerPeriodS, analyzerDeadTimeS,
         inputNoiseRelative, inputTempNoiseK, inputBiasRelative, inputBiasTempK, inputBiasTimeS, cellNoiseK2PerS, activityDriftPerHour, heatLossDriftPerHour,
-        biasDriftKPerHour, heatTransferPrior, heatTransferPriorSd, heatTransferDriftPerHour, horizonS, forecastEveryS,
+        biasDriftKPerHour, heatTransferPrior, heatTransferPriorSd, heatTransferDriftPerHour, driftWindowS, horizonS, forecastEveryS,
         startupS);
   }
 
@@ -115,7 +117,7 @@ public record SoftSensorSettings(
     return new SoftSensorSettings(blockS, jacobianRefreshS, jacobianRefreshK, lagS, temperatureNoiseK,
         temperatureFloorK, analyzerNoiseMolPct, analyzerFloorMolPct, periodS, deadTimeS,
         inputNoiseRelative, inputTempNoiseK, inputBiasRelative, inputBiasTempK, inputBiasTimeS, cellNoiseK2PerS, activityDriftPerHour, heatLossDriftPerHour,
-        biasDriftKPerHour, heatTransferPrior, heatTransferPriorSd, heatTransferDriftPerHour, horizonS, forecastEveryS,
+        biasDriftKPerHour, heatTransferPrior, heatTransferPriorSd, heatTransferDriftPerHour, driftWindowS, horizonS, forecastEveryS,
         startupS);
   }
 }

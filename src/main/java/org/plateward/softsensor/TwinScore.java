@@ -36,6 +36,8 @@ public final class TwinScore {
   private long scored;
   private double sumSq;
   private double maxErr;
+  private double maxErrAtS = Double.NaN;
+  private double maxCellMeltErrAtS = Double.NaN;
   private long covered;
   private double neesSum;
   private long neesCount;
@@ -120,7 +122,10 @@ public final class TwinScore {
     double sd = e.peakPlateTempSdK();
     scored++;
     sumSq += err * err;
-    maxErr = Math.max(maxErr, Math.abs(err));
+    if (Math.abs(err) > maxErr) {
+      maxErr = Math.abs(err);
+      maxErrAtS = tS - t0;
+    }
     boolean in = Math.abs(err) <= 2.0 * sd;
     if (in) {
       covered++;
@@ -149,7 +154,11 @@ public final class TwinScore {
     }
     Double maxMelt = truth.get(MAX_MELT);
     if (maxMelt != null && !maxMelt.isNaN()) {
-      maxCellMeltErr = Math.max(maxCellMeltErr, Math.abs(e.maxCellMeltFraction() - maxMelt));
+      double me = Math.abs(e.maxCellMeltFraction() - maxMelt);
+      if (me > maxCellMeltErr) {
+        maxCellMeltErr = me;
+        maxCellMeltErrAtS = tS - t0;
+      }
     }
     if (e.nisDof() > 0 && Double.isFinite(e.nis())) {
       nisSum += e.nis();
@@ -179,6 +188,16 @@ public final class TwinScore {
 
   public long scoredFrames() {
     return scored;
+  }
+
+  /** Time of the largest peak error from the first frame (s). */
+  public double peakMaxErrorAtS() {
+    return maxErrAtS;
+  }
+
+  /** Time of the largest max-cell melt error from the first frame (s). */
+  public double maxCellMeltErrorAtS() {
+    return maxCellMeltErrAtS;
   }
 
   public double peakRmseK() {
@@ -254,12 +273,12 @@ public final class TwinScore {
     double[] ib = nisBand();
     sb.append(String.format(Locale.ROOT, "accuracy against simulation truth (after %.0f min start-up, %d frames):%n",
         startupS / 60.0, scored));
-    sb.append(String.format(Locale.ROOT, "  peak plate temperature  RMSE %.2f K, max error %.2f K%n", peakRmseK(), peakMaxErrorK()));
+    sb.append(String.format(Locale.ROOT, "  peak plate temperature  RMSE %.2f K, max error %.2f K (at %.0f s)%n", peakRmseK(), peakMaxErrorK(), maxErrAtS));
     sb.append(String.format(Locale.ROOT, "  2-sigma coverage        %.1f %% overall%n", 100 * coverage()));
     for (Upset u : upsets) {
       sb.append(String.format(Locale.ROOT, "    upset %5.0f-%5.0f s   %.1f %% of %d frames%n", u.startS, u.endS, 100 * u.coverage(), u.frames));
     }
-    sb.append(String.format(Locale.ROOT, "  max-cell melt fraction  max error %.3f%n", maxCellMeltErr));
+    sb.append(String.format(Locale.ROOT, "  max-cell melt fraction  max error %.3f (at %.0f s)%n", maxCellMeltErr, maxCellMeltErrAtS));
     sb.append(String.format(Locale.ROOT, "  overall melt fraction   max error %.4f%n", maxMeltErr));
     sb.append(String.format(Locale.ROOT, "  mean NEES (peak)        %.2f, 95%% band [%.2f, %.2f]%n", meanNees(), nb[0], nb[1]));
     sb.append(String.format(Locale.ROOT, "  mean NIS per dof        %.2f, 95%% band [%.2f, %.2f]%n", meanNisPerDof(), ib[0], ib[1]));
