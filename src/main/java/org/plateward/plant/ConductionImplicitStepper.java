@@ -75,14 +75,30 @@ public final class ConductionImplicitStepper {
    */
   public void step(double[] e, OperatingPoint u, ModelParameters p, double hS) {
     model.evaluate(e, u, p, eval);
+    step(e, p, hS, eval);
+  }
+
+  /**
+   * Advances {@code e} by {@code hS} seconds using {@code ev}, which must hold the model
+   * evaluated at exactly this {@code e} (and the inputs and parameters p of the step): saves the
+   * evaluation when the caller has just made it for the outputs.
+   */
+  public void step(double[] e, ModelParameters p, double hS, ModelEvaluation ev) {
     double loss = p.heatLossCoefficientWPerM2K();
+    double sensible = 1.0 / plate.sensibleJPerM2K();
+    double bandLow = plate.meltStartJPerM2() - probe;
+    double bandHigh = plate.meltEndJPerM2() + probe;
     for (int j = 0; j < n; j++) {
-      // central secant of T(e) over +-1 mK of sensible heat: 1/C outside the band
-      dTde[j] = (plate.tempK(e[j] + probe) - plate.tempK(e[j] - probe)) / (2.0 * probe);
+      if (e[j] < bandLow || e[j] > bandHigh) {
+        dTde[j] = sensible; // outside the mushy band T = Tref + (e - Lambda phi) / C exactly
+      } else {
+        // central secant of T(e) over +-1 mK of sensible heat
+        dTde[j] = (plate.tempK(e[j] + probe) - plate.tempK(e[j] - probe)) / (2.0 * probe);
+      }
     }
     for (int j = 0; j < n - 1; j++) {
-      double ra = 0.5 * dz[j] / plate.axialConductanceWPerK(eval.meltFraction(j));
-      double rb = 0.5 * dz[j + 1] / plate.axialConductanceWPerK(eval.meltFraction(j + 1));
+      double ra = 0.5 * dz[j] / plate.axialConductanceWPerK(ev.meltFraction(j));
+      double rb = 0.5 * dz[j + 1] / plate.axialConductanceWPerK(ev.meltFraction(j + 1));
       g[j] = 1.0 / (ra + rb);
     }
     for (int j = 0; j < n; j++) {
@@ -92,7 +108,7 @@ public final class ConductionImplicitStepper {
       lower[j] = j > 0 ? -hS * gl / dz[j] * dTde[j - 1] : 0.0;
       upper[j] = j < n - 1 ? -hS * gr / dz[j] * dTde[j + 1] : 0.0;
       diag[j] = 1.0 + hS * ((gl + gr) / dz[j] + loss) * dTde[j];
-      rhs[j] = hS * eval.enthalpyRateWPerM2(j);
+      rhs[j] = hS * ev.enthalpyRateWPerM2(j);
     }
     solveTridiagonal();
     for (int j = 0; j < n; j++) {

@@ -39,6 +39,7 @@ public final class SensorBank {
   private final long deadSteps;
   private final ArrayDeque<PendingSample> pending = new ArrayDeque<>();
   private final boolean[] analyzerWasOut = new boolean[Signal.COUNT];
+  private final boolean[] analyzerPublished = new boolean[Signal.COUNT];
   private boolean first = true;
 
   private record PendingSample(long dueFrame, double[] valuesSi) {}
@@ -130,10 +131,13 @@ public final class SensorBank {
         valuesSi[i] = due[i];
         quality[i] = analyzerWasOut[i] ? Quality.UNCERTAIN : Quality.GOOD;
         analyzerWasOut[i] = false;
+        analyzerPublished[i] = true;
       } else {
         valuesSi[i] = Double.NaN;
         quality[i] = Quality.MISSING;
-        status.put(s, analyzerWasOut[i] ? StatusName.BAD_NO_COMMUNICATION : StatusName.UNCERTAIN_LAST_USABLE_VALUE);
+        if (analyzerPublished[i]) { // before the first result the status is Bad_WaitingForInitialData
+          status.put(s, analyzerWasOut[i] ? StatusName.BAD_NO_COMMUNICATION : StatusName.UNCERTAIN_LAST_USABLE_VALUE);
+        }
       }
     }
   }

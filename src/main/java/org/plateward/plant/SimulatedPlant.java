@@ -15,7 +15,9 @@ import org.plateward.signals.StatusName;
 /**
  * The simulated plant running one scenario: frame 0 is the steady state of the truth at the
  * scenario's initial inputs; each further frame advances the truth plate by one sample period
- * with the inputs and parameters of the interval's midpoint, then reads the instruments.
+ * with the inputs and parameters of the interval's start (so the evaluation made for the
+ * previous frame's outputs is also the step's f: one model evaluation per frame), then reads
+ * the instruments.
  * Deterministic; not thread-safe.
  */
 public final class SimulatedPlant {
@@ -30,6 +32,8 @@ public final class SimulatedPlant {
   private final Quality[] quality = new Quality[Signal.COUNT];
   private final Map<Signal, StatusName> status = new EnumMap<>(Signal.class);
   private long next;
+  private OperatingPoint lastU;
+  private ModelParameters lastP;
 
   /** Builds the plant and solves its initial steady state (a few seconds at 200 cells). */
   public SimulatedPlant(UnitSpec unit, Scenario scenario) {
@@ -70,12 +74,14 @@ public final class SimulatedPlant {
     long k = next++;
     double t = k * dtS;
     if (k > 0) {
-      double mid = t - 0.5 * dtS;
-      plate.advance(schedule.inputsAt(mid), schedule.parametersAt(mid), dtS, scenario.truth().substeps());
+      // inputs and parameters held at the interval's start (their ramps last a minute or more)
+      plate.advanceFromLastEvaluation(lastP, lastU, dtS, scenario.truth().substeps());
     }
     OperatingPoint u = schedule.inputsAt(t);
     ModelParameters p = schedule.parametersAt(t);
     ModelEvaluation ev = plate.evaluate(u, p);
+    lastU = u;
+    lastP = p;
     boundary(u, ev);
     sensors.read(k, t, trueSi, valuesSi, quality, status);
     TruthPlate.HiddenTruth h = plate.hiddenTruth();

@@ -62,6 +62,18 @@ public final class TruthPlate {
     }
   }
 
+  /**
+   * Advances by {@code dtS} in {@code substeps} steps at constant (u, p), where the last {@link
+   * #evaluate} was made at the current state with these same u and p (its f is reused).
+   */
+  public void advanceFromLastEvaluation(ModelParameters p, OperatingPoint u, double dtS, int substeps) {
+    double h = dtS / substeps;
+    stepper.step(e, p, h, eval);
+    for (int k = 1; k < substeps; k++) {
+      stepper.step(e, u, p, h);
+    }
+  }
+
   /** Evaluates f, outputs and profiles at the current state into the plate's workspace. */
   public ModelEvaluation evaluate(OperatingPoint u, ModelParameters p) {
     model.evaluate(e, u, p, eval);
