@@ -47,6 +47,8 @@ public final class ReactorSoftSensor {
     Signal.COMB_OUTLET_O2
   };
   private static final int SLOTS = 2;
+  /** The time-to-exhaust forecast runs while the peak is within this of the melting point (K). */
+  static final double NEAR_MELT_K = 40.0;
 
   private final UnitSpec spec;
   private final SoftSensorSettings settings;
@@ -691,7 +693,7 @@ public final class ReactorSoftSensor {
 
   /**
    * Time-to-exhaust: recomputed every {@code forecastEveryS} while a cell is melting or the peak
-   * is within 15 K of the melting point (otherwise none is reported). Mean forecast from the
+   * is within {@link #NEAR_MELT_K} of the melting point (otherwise none is reported). Mean forecast from the
    * posterior mean; spread from two more forecasts at x ± v with v = P e_k / √P_kk, the
    * conditional shift of the whole state when the critical cell k moves by one σ (a sigma-point
    * pair along the direction that matters most); σ = half the difference of their times.
@@ -699,7 +701,7 @@ public final class ReactorSoftSensor {
   private void updateExhaust(double[] x, double[][] p, HiddenPeak pk, double maxMelt) {
     double tS = lastEpochS;
     double meltK = spec.buffer().meltingPointK();
-    boolean near = maxMelt > 0.0 || pk.tempK() > meltK - 15.0;
+    boolean near = maxMelt > 0.0 || pk.tempK() > meltK - NEAR_MELT_K;
     if (!near) {
       tteS = Double.POSITIVE_INFINITY;
       tteSdS = Double.NaN;
