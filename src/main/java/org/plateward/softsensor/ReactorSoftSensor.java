@@ -48,7 +48,7 @@ public final class ReactorSoftSensor {
   };
   private static final int SLOTS = 2;
   /** The time-to-exhaust forecast runs while the peak is within this of the melting point (K). */
-  static final double NEAR_MELT_K = 40.0;
+  static final double NEAR_MELT_K = 25.0;
 
   private final UnitSpec spec;
   private final SoftSensorSettings settings;
@@ -702,7 +702,7 @@ public final class ReactorSoftSensor {
     double tS = lastEpochS;
     double meltK = spec.buffer().meltingPointK();
     boolean near = maxMelt > 0.0 || pk.tempK() > meltK - NEAR_MELT_K;
-    if (!near) {
+    if (!near || dynamics.builds() == 0) { // no Jacobian yet before the first propagation
       tteS = Double.POSITIVE_INFINITY;
       tteSdS = Double.NaN;
       tteAtS = Double.NaN;

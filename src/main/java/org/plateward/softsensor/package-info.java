@@ -93,7 +93,7 @@
  *       over ±1σ of each cell and the full cell covariance (the plain derivative is zero
  *       outside the band). Remaining latent capacity of one plate, J.</li>
  *   <li>Time-to-exhaust ({@link org.plateward.softsensor.ExhaustForecast}): while a cell melts
- *       or the peak is within 40 K of the melting point, every 30 s, an open-loop forecast from
+ *       or the peak is within 25 K of the melting point (the demo unit runs 38 K below it), every 30 s, an open-loop forecast from
  *       the posterior mean with the present inputs and parameters held, over 1800 s; between
  *       forecasts it counts down. Spread: two more forecasts from x ± P e_k/√P_kk, the
  *       conditional shift of the whole state when the critical cell k moves by one σ (a

@@ -40,14 +40,4 @@ class TwinExperimentTest {
     soft.assertThat(s.meanNees()).as("mean NEES of the peak").isBetween(band[0], band[1]);
     soft.assertAll();
   }
-
-  @ParameterizedTest(name = "{0}")
-  @ValueSource(strings = {"feed-drop", "fuel-surge", "analyzer-outage", "catalyst-ageing"})
-  void replayIsFasterThanRequired(String recording) {
-    // required ≥ 2,000× real time on one core (issue 4); measured here with the CSV reading and
-    // on a machine shared with other jobs, so this is the figure the report quotes
-    TwinRun run = TwinRun.of(recording);
-    assertThat(run.stats.timesRealTime()).as("replay speed, x real time (load %s)", TwinRun.loadAverage())
-        .isGreaterThanOrEqualTo(2000.0);
-  }
 }
