@@ -3,6 +3,7 @@ package org.plateward.cli;
 import java.io.PrintWriter;
 import org.plateward.config.ConfigError;
 import org.plateward.config.InvalidConfigException;
+import org.plateward.replay.ReplayFormatException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import picocli.CommandLine;
@@ -25,6 +26,12 @@ final class FailureHandler implements CommandLine.IExecutionExceptionHandler {
       }
       int n = invalid.errors().size();
       err.println(n + (n == 1 ? " problem" : " problems") + " found; nothing was changed.");
+      err.flush();
+      return PlatewardCommand.EXIT_BAD_INPUT;
+    }
+    if (ex instanceof ReplayFormatException bad) {
+      err.println(bad.getMessage());
+      err.println("1 problem found; nothing was written.");
       err.flush();
       return PlatewardCommand.EXIT_BAD_INPUT;
     }

@@ -42,4 +42,15 @@ public interface Dynamics {
     derivative(x, u, dxdt);
     jacobian(x, u, dfdx);
   }
+
+  /**
+   * Identifies the Jacobian the last {@link #evaluate} or {@link #jacobian} call returned. A
+   * model that holds its Jacobian over several steps (refreshing it only when the state or the
+   * inputs have moved) returns a number ≥ 0 that changes whenever the Jacobian changes; the
+   * filter then reuses Φ = (I − hJ)⁻¹ instead of factorising again. The default, −1, means
+   * "may change on every call".
+   */
+  default long jacobianVersion() {
+    return -1L;
+  }
 }

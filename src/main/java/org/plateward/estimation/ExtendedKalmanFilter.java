@@ -25,7 +25,7 @@ public final class ExtendedKalmanFilter {
   private final Dynamics dynamics;
   private final FilterSettings settings;
   private final int n;
-  private final double[][] processNoiseDensity;
+  private double[][] processNoiseDensity;
 
   private final double[] x;
   private double[][] p;
@@ -40,6 +40,10 @@ public final class ExtendedKalmanFilter {
   private double[][] work;
   private final double[] vecWork;
   private final double[] vecWork2;
+  private double[][] phi;
+  private long phiVersion = -1L;
+  private double phiStepS = Double.NaN;
+  private long phiBuilds;
 
   private final CovarianceGuard guard;
   private final ChiSquareTable channelGate;
@@ -196,6 +200,11 @@ public final class ExtendedKalmanFilter {
 
   private void substep(double[] u, double h, double inflation) {
     dynamics.evaluate(x, u, f, jac);
+    final long version = dynamics.jacobianVersion();
+    if (version >= 0) {
+      heldJacobianSubstep(version, h, inflation);
+      return;
+    }
     // A = I − h J, factorised once and used for the state and both covariance solves
     for (int i = 0; i < n; i++) {
       final double[] ai = lu[i];
@@ -229,6 +238,75 @@ public final class ExtendedKalmanFilter {
     Matrices.luSolve(lu, perm, work, rowsWork);
     Matrices.transposeInto(work, p);
     Matrices.luSolve(lu, perm, p, rowsWork);
+  }
+
+  /**
+   * Sub-step with a Jacobian the model holds over several steps: Φ = (I − hJ)⁻¹ is formed
+   * explicitly once per Jacobian version and step length (one LU and n solves), and each step
+   * is then x ← x + Φ h f, P ← Φ (P + h λ Q) Φᵀ as two products that skip the zero entries of Φ
+   * (the rows of random-walk and held states are unit rows). Same arithmetic as the LU path.
+   */
+  private void heldJacobianSubstep(long version, double h, double inflation) {
+    if (phi == null) {
+      phi = new double[n][n];
+    }
+    if (version != phiVersion || h != phiStepS) {
+      for (int i = 0; i < n; i++) {
+        final double[] ai = lu[i];
+        final double[] ji = jac[i];
+        for (int j = 0; j < n; j++) {
+          ai[j] = -h * ji[j];
+        }
+        ai[i] += 1.0;
+      }
+      if (!Matrices.luInPlace(lu, perm)) {
+        throw new IllegalStateException("I - hJ is singular at t=" + timeS + " s, h=" + h + " s");
+      }
+      for (int i = 0; i < n; i++) {
+        Arrays.fill(phi[i], 0.0);
+        phi[i][i] = 1.0;
+      }
+      Matrices.luSolve(lu, perm, phi, rowsWork);
+      // drop round-off below 1e-14 of the row's largest entry so the products skip it
+      for (int i = 0; i < n; i++) {
+        double big = 0.0;
+        for (int j = 0; j < n; j++) {
+          big = Math.max(big, Math.abs(phi[i][j]));
+        }
+        for (int j = 0; j < n; j++) {
+          if (Math.abs(phi[i][j]) < 1e-14 * big) {
+            phi[i][j] = 0.0;
+          }
+        }
+      }
+      phiVersion = version;
+      phiStepS = h;
+      phiBuilds++;
+    }
+    for (int i = 0; i < n; i++) {
+      final double[] row = phi[i];
+      double s = 0.0;
+      for (int j = 0; j < n; j++) {
+        s += row[j] * f[j];
+      }
+      vecWork[i] = h * s;
+    }
+    for (int i = 0; i < n; i++) {
+      x[i] += vecWork[i];
+    }
+    final double hq = h * inflation;
+    for (int i = 0; i < n; i++) {
+      final double[] li = lu[i];
+      final double[] pi = p[i];
+      final double[] qi = processNoiseDensity[i];
+      for (int j = 0; j < n; j++) {
+        li[j] = pi[j] + hq * qi[j];
+      }
+    }
+    // lu is free scratch from here (its factors are only needed when Φ is rebuilt)
+    Matrices.multiply(phi, lu, work); // Y = Φ M
+    Matrices.transposeInto(work, lu); // Yᵀ = M Φᵀ
+    Matrices.multiply(phi, lu, p); // Φ M Φᵀ
   }
 
   // ---------------------------------------------------------------------------------------
@@ -619,6 +697,72 @@ public final class ExtendedKalmanFilter {
   private InnovationCusum cusumFor(MeasurementModel model) {
     return cusums.computeIfAbsent(model, mm -> new InnovationCusum(mm.size(),
         settings.cusumSlack(), settings.cusumThreshold(), timeS));
+  }
+
+  /**
+   * Stochastic cloning for a delayed measurement (Roumeliotis &amp; Burdick 2002): sets the held
+   * states {@code targets} to the present prediction of {@code model}, with their exact
+   * covariance: x_c = h(x), P_c· = H P, P_cc = H P Hᵀ + δ I. The held states must have zero
+   * dynamics and zero process noise; when the delayed value arrives, an update with z = x_c
+   * applies it where it belongs in time, exactly for a linear model, at the cost of m extra
+   * states instead of a rollback. δ (state units²) keeps P positive definite (the clone is
+   * otherwise an exact linear function of the other states); use the variance of sample
+   * handling, or a value far below R. The clone is not stored in the rollback history: do not
+   * mix it with {@link #updateDelayed} across the same interval.
+   *
+   * @param model predicts the values to hold (m channels); it must not depend on the targets
+   * @param targets m state indices that receive the clone
+   * @param u inputs at this time
+   * @param jitterVariance δ, ≥ 0
+   */
+  public void captureClone(MeasurementModel model, int[] targets, double[] u, double jitterVariance) {
+    final int m = model.size();
+    if (targets.length != m) {
+      throw new IllegalArgumentException("model has " + m + " channels, got " + targets.length + " targets");
+    }
+    final double[] y = new double[m];
+    final double[][] h = new double[m][n];
+    model.evaluate(x, u, y, h);
+    for (int t : targets) {
+      for (int i = 0; i < m; i++) {
+        h[i][t] = 0.0;
+      }
+    }
+    final double[][] hp = new double[m][n];
+    Matrices.multiply(h, p, hp);
+    final double[][] hph = new double[m][m];
+    Matrices.multiplyTransposed(hp, h, hph);
+    for (int i = 0; i < m; i++) {
+      x[targets[i]] = y[i];
+    }
+    for (int i = 0; i < m; i++) {
+      final int ti = targets[i];
+      for (int j = 0; j < n; j++) {
+        p[ti][j] = hp[i][j];
+        p[j][ti] = hp[i][j];
+      }
+    }
+    for (int i = 0; i < m; i++) {
+      for (int k = 0; k < m; k++) {
+        p[targets[i]][targets[k]] = 0.5 * (hph[i][k] + hph[k][i]) + (i == k ? jitterVariance : 0.0);
+      }
+    }
+  }
+
+  /**
+   * Replaces the continuous process noise density Q for the propagations that follow (for a
+   * model whose input-noise mapping B Σ Bᵀ moves with the operating point).
+   *
+   * @param q n×n (state units²/s), symmetric positive semi-definite
+   */
+  public void setProcessNoiseDensity(double[][] q) {
+    Matrices.requireShape(q, n, n, "Q");
+    processNoiseDensity = Matrices.copy(q);
+  }
+
+  /** Number of times Φ was formed for a held Jacobian (a measure of the refresh rate). */
+  public long transitionBuilds() {
+    return phiBuilds;
   }
 
   // ---------------------------------------------------------------------------------------
