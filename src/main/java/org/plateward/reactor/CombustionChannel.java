@@ -29,7 +29,6 @@ final class CombustionChannel {
   private final double[] x = new double[NS];
   private final double[] q = new double[2];
   private final double[] lambdaScratch = new double[NS];
-  private final double[] muScratch = new double[NS];
   private final GasFlux gas = new GasFlux();
 
   CombustionChannel(Geometry g, Grid grid, double nusselt) {
@@ -90,7 +89,7 @@ final class CombustionChannel {
       f[o + O2] -= 2.0 * xi;
       f[o + CO2] += xi;
       f[o + H2O] += 2.0 * xi;
-      double h = htMultiplier * nusselt * GasTables.conductivityWPerMK(x, film, lambdaScratch, muScratch) / hydraulicDiameterM;
+      double h = htMultiplier * nusselt * GasTables.conductivityWPerMK(x, film, lambdaScratch) / hydraulicDiameterM;
       out.tempK[j] = gas.exchange(f, in, o, tin, tw, h * wallAreaM2[j], q);
       out.reactionHeatW[j] = q[1];
       out.heatToPlateW[j] = q[1] - q[0];

@@ -9,8 +9,8 @@ import org.plateward.thermo.Species;
 /**
  * Temperature tables of everything the channel marches need per cell, built once from the
  * thermo and kinetics packages and read by linear interpolation on a 0.5 K grid: species
- * enthalpy and heat capacity, pure-species conductivity and square-root viscosity (for the
- * Wassiljewa-Mason-Saxena mixing rule), the Xu-Froment constants and the combustion surface
+ * enthalpy and heat capacity, pure-species conductivity and Wilke's interaction factors (for
+ * the Wassiljewa-Mason-Saxena mixing rule), the Xu-Froment constants and the combustion surface
  * rate constant. The interpolation error is below 1e-5 relative for the Arrhenius terms
  * (their curvature (E/RT^2)^2 h^2/8) and far smaller for the thermo; every caller in the
  * model uses the same tables, so the energy balance still closes to rounding.
@@ -26,7 +26,7 @@ final class GasTables {
   private static final double[] H = new double[NODES * NS];
   private static final double[] CP = new double[NODES * NS];
   private static final double[] LAMBDA = new double[NODES * NS];
-  private static final double[] SQRT_MU = new double[NODES * NS];
+  private static final double[] PHI = new double[NODES * NS * NS];
   private static final double[] XF = new double[NODES * NC];
   private static final double[] KS = new double[NODES];
 
@@ -38,7 +38,9 @@ final class GasTables {
         H[i * NS + k] = IdealGasThermo.enthalpyJPerMol(k, t);
         CP[i * NS + k] = IdealGasThermo.heatCapacityJPerMolK(k, t);
         LAMBDA[i * NS + k] = MixtureProperties.pureThermalConductivityWPerMK(k, t);
-        SQRT_MU[i * NS + k] = Math.sqrt(MixtureProperties.pureViscosityPaS(k, t));
+        for (int m = 0; m < NS; m++) {
+          PHI[(i * NS + k) * NS + m] = MixtureProperties.wilkePhi(k, m, t);
+        }
       }
       XuFromentKinetics.constants(t, c);
       System.arraycopy(c, 0, XF, i * NC, NC);
@@ -93,10 +95,14 @@ final class GasTables {
     return KS[i] + w * (KS[i + 1] - KS[i]);
   }
 
-  /** Mixture thermal conductivity at T by the Wassiljewa-Mason-Saxena rule, W/(m K). */
-  static double conductivityWPerMK(double[] moleFractions, double tempK, double[] scratchA, double[] scratchB) {
-    interpolate(LAMBDA, NS, tempK, scratchA);
-    interpolate(SQRT_MU, NS, tempK, scratchB);
-    return MixtureProperties.thermalConductivityWPerMK(moleFractions, scratchA, scratchB);
+  /**
+   * Mixture thermal conductivity at T by the Wassiljewa-Mason-Saxena rule, W/(m K): pure
+   * conductivities interpolated, Wilke's factors taken at the nearest node (they vary with T
+   * only through viscosity ratios, well under 1e-4 over a quarter kelvin).
+   */
+  static double conductivityWPerMK(double[] moleFractions, double tempK, double[] scratch) {
+    interpolate(LAMBDA, NS, tempK, scratch);
+    int node = (int) Math.round((clamp(tempK) - MIN_K) / STEP_K);
+    return MixtureProperties.thermalConductivityWPerMK(moleFractions, scratch, PHI, node * NS * NS);
   }
 }

@@ -37,7 +37,6 @@ final class ReformingChannel {
   private final double[] r = new double[3];
   private final double[] q = new double[2];
   private final double[] lambdaScratch = new double[NS];
-  private final double[] muScratch = new double[NS];
   private final GasFlux gas = new GasFlux();
 
   ReformingChannel(Geometry g, Grid grid, double loadingKgPerM2, double nusselt) {
@@ -99,7 +98,7 @@ final class ReformingChannel {
       double tin = out.tempK[j];
       GasFlux.moleFractions(f, o, x);
       double film = 0.5 * (tin + tw);
-      double h = htMultiplier * nusselt * GasTables.conductivityWPerMK(x, film, lambdaScratch, muScratch) / hydraulicDiameterM;
+      double h = htMultiplier * nusselt * GasTables.conductivityWPerMK(x, film, lambdaScratch) / hydraulicDiameterM;
       out.tempK[j + 1] = gas.exchange(f, in, o, tin, tw, h * wallAreaM2[j], q);
       out.reactionHeatW[j] = q[1];
       out.heatToPlateW[j] = q[1] - q[0];
@@ -128,9 +127,9 @@ final class ReformingChannel {
     double a = 0.0;
     double b = 0.0;
     for (int it = 0; it < MAX_NEWTON; it++) {
-      cellRates(f, in, a, b, c, mcat, pBar, g0);
-      cellRates(f, in, a + da, b, c, mcat, pBar, ga);
-      cellRates(f, in, a, b + da, c, mcat, pBar, gb);
+      cellRates(f, in, nTot, a, b, c, mcat, pBar, g0);
+      cellRates(f, in, nTot, a + da, b, c, mcat, pBar, ga);
+      cellRates(f, in, nTot, a, b + da, c, mcat, pBar, gb);
       // M = I - dg/d(a,b);  M d = g(a, b) - (a, b)
       double m11 = 1.0 - (ga[0] - g0[0]) / da;
       double m21 = -(ga[1] - g0[1]) / da;
@@ -196,13 +195,13 @@ final class ReformingChannel {
 
   /** g(a, b) = m_cat (r1 + r3, r2 + r3) at the composition after extents a and b, mol/s. */
   private void cellRates(
-      double[] f, int in, double a, double b, double[] c, double mcat, double pBar, double[] g) {
+      double[] f, int in, double nTotIn, double a, double b, double[] c, double mcat, double pBar, double[] g) {
     double nCh4 = f[in + CH4] - a;
     double nH2o = f[in + H2O] - a - b;
     double nCo = f[in + CO] + a - b;
     double nCo2 = f[in + CO2] + b;
     double nH2 = f[in + H2] + 3.0 * a + b;
-    double tot = GasFlux.total(f, in) + 2.0 * a;
+    double tot = nTotIn + 2.0 * a;
     double s = pBar / tot;
     XuFromentKinetics.rates(c, nCh4 * s, nH2o * s, nCo * s, nCo2 * s, nH2 * s, r);
     g[0] = mcat * (r[0] + r[2]);

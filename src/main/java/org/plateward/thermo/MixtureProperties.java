@@ -91,8 +91,6 @@ public final class MixtureProperties {
   /** Fuller: 1e-4 * 0.00143 * 1e5 / (√M_AB [..]²), so D = c T^1.75 / p[Pa] in m²/s. */
   private static final double[] FULLER_COEF = new double[N * N];
 
-  private static final ThreadLocal<double[]> INV_SQRT_MU = ThreadLocal.withInitial(() -> new double[N]);
-
   private static final ThreadLocal<double[]> SCRATCH =
       ThreadLocal.withInitial(() -> new double[3 * N]);
 
@@ -228,39 +226,46 @@ public final class MixtureProperties {
   }
 
   /**
-   * Mixture thermal conductivity by the same Wassiljewa–Mason–Saxena rule from pure-species
-   * values the caller already has (for callers that tabulate λ_i(T) and √μ_i(T)).
+   * Wilke's interaction factor Φ_ij = [1 + (μ_i/μ_j)^½ (M_j/M_i)^¼]² / [8 (1 + M_i/M_j)]^½ at T,
+   * for callers that tabulate it.
+   *
+   * @param i species ordinal
+   * @param j species ordinal
+   * @param tempK temperature, K
+   * @return Φ_ij, dimensionless
+   */
+  public static double wilkePhi(int i, int j, double tempK) {
+    double a = 1.0 + Math.sqrt(pureViscosityPaS(i, tempK) / pureViscosityPaS(j, tempK)) * MASS_RATIO_QUARTER[i * N + j];
+    return a * a * PHI_DENOM_INV[i * N + j];
+  }
+
+  /**
+   * Mixture thermal conductivity by the same Wassiljewa–Mason–Saxena rule, λ = Σ_i x_i λ_i /
+   * Σ_j x_j Φ_ij, from pure-species conductivities and Φ_ij the caller already has.
    *
    * @param moleFractions x_i per species index, length 7, non-negative
    * @param pureConductivityWPerMK λ_i at the temperature, W/(m K), length 7
-   * @param sqrtViscosity √μ_i at the temperature, √(Pa s), length 7
+   * @param phi Φ_ij at the temperature, row-major 7 × 7 starting at {@code phiOffset}
+   * @param phiOffset index of Φ_00 in {@code phi}
    * @return λ, W/(m K)
    */
   public static double thermalConductivityWPerMK(
-      double[] moleFractions, double[] pureConductivityWPerMK, double[] sqrtViscosity) {
-    double[] inv = INV_SQRT_MU.get();
-    for (int j = 0; j < N; j++) {
-      inv[j] = moleFractions[j] != 0.0 ? 1.0 / sqrtViscosity[j] : 0.0;
-    }
+      double[] moleFractions, double[] pureConductivityWPerMK, double[] phi, int phiOffset) {
     double lambda = 0.0;
     for (int i = 0; i < N; i++) {
       double x = moleFractions[i];
       if (x != 0.0) {
-        double sqrtMuI = sqrtViscosity[i];
         double sum = 0.0;
-        int row = i * N;
+        int row = phiOffset + i * N;
         for (int j = 0; j < N; j++) {
-          double xj = moleFractions[j];
-          if (xj != 0.0) {
-            double a = 1.0 + sqrtMuI * inv[j] * MASS_RATIO_QUARTER[row + j];
-            sum += xj * a * a * PHI_DENOM_INV[row + j];
-          }
+          sum += moleFractions[j] * phi[row + j];
         }
         lambda += x * pureConductivityWPerMK[i] / sum;
       }
     }
     return lambda;
   }
+
 
 
   /** Fills s[0..6] = μ_i, s[7..13] = √μ_i and optionally s[14..20] = λ_i for present species. */
