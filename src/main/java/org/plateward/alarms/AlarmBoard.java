@@ -141,14 +141,14 @@ public final class AlarmBoard {
     Objects.requireNonNull(action, "action");
     String refusal = precheck(action, time, who, alarm, reason, expiry);
     if (refusal != null) {
-      return refuse(action, alarm, refusal);
+      return refuse(action, refusal);
     }
     Entry e = entries.get(alarm);
     List<AlarmEvent> out = new ArrayList<>();
     expireShelves(time, out);
     Transition tr = AlarmLifecycle.next(e.state, action.trigger(), e.filter.active(), e.suppressed);
     if (tr.kind() == Transition.Kind.REFUSE) {
-      return refuse(action, alarm, alarm.key() + ": " + tr.reason());
+      return refuse(action, alarm.key() + ": " + tr.reason());
     }
     String why = reason == null || reason.isBlank() ? null : reason.strip();
     OperatorAction record = new OperatorAction(time, who.strip(), action, alarm, why,
@@ -205,9 +205,8 @@ public final class AlarmBoard {
     return null;
   }
 
-  private static ActionResult refuse(ActionKind action, AlarmKind alarm, String message) {
-    LOG.info("refused action={} alarm={}: {}", action.word(),
-        alarm == null ? "-" : alarm.key(), message);
+  private static ActionResult refuse(ActionKind action, String message) {
+    LOG.info("refused action={}: {}", action.word(), message);
     return ActionResult.refused(message);
   }
 
