@@ -88,7 +88,8 @@ public final class AlarmBoard {
       e.filter.update(now, e.value);
     }
     Entry hh = entries.get(AlarmKind.PEAK_HIGH_HIGH);
-    boolean hhOn = hh != null && hh.filter.active() && hh.state != AlarmState.OUT_OF_SERVICE;
+    boolean hhOn = hh != null && hh.filter.active() && hh.state != AlarmState.OUT_OF_SERVICE
+        && hh.state != AlarmState.SHELVED;
     for (Entry e : entries.values()) {
       boolean s = DesignSuppression.holds(e.def.kind(), in, settings, hhOn);
       if (s != e.suppressed) {

@@ -8,8 +8,9 @@ import java.util.Set;
  *
  * <ol>
  *   <li><b>High-high suppresses high.</b> {@code peak_high} is suppressed while the condition of
- *       {@code peak_high_high} is active and that alarm is in service: one alarm for one hot
- *       spot, at the more urgent priority.
+ *       {@code peak_high_high} is active and that alarm is neither shelved nor out of service:
+ *       one alarm for one hot spot, at the more urgent priority. An operator who shelves or
+ *       removes the high-high alarm still sees the high one.
  *   <li><b>An untrustworthy estimate raises no estimate alarms.</b> {@code peak_high},
  *       {@code peak_high_high}, {@code melt_high} and {@code exhaust_low} are suppressed while
  *       the estimator reports {@code untrustworthy} and the {@code estimator_untrustworthy}
@@ -34,7 +35,7 @@ public final class DesignSuppression {
    * @param in the current inputs
    * @param settings the configured definitions (which alarms are enabled)
    * @param highHighInService whether the {@code peak_high_high} condition is active and that
-   *     alarm is enabled and not out of service
+   *     alarm is enabled, not shelved and not out of service
    */
   public static boolean holds(AlarmKind kind, AlarmInputs in, AlarmSettings settings,
       boolean highHighInService) {

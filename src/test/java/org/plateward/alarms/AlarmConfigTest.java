@@ -117,9 +117,10 @@ class AlarmConfigTest {
         "[alarms.history_not_kept]\npriority = \"notice\"\nlimit = \"1 s\"\nenabled = \"yes\"");
     Files.writeString(f, Files.readString(f)
         .replace("limit = \"1135 degC\"", "limit = \"1100 degC\"")
-        .replace("k_sigma = 2.0", "k_sigma = 2.0\nk_sigmas = 3"));
+        .replace("k_sigma = 2.0", "k_sigma = -2.0\nk_sigmas = 3"));
     List<String> e = errors(f);
     assertThat(e).contains(
+        f + ":" + line(f, "k_sigma =") + ": alarms.k_sigma: must not be negative, got -2",
         f + ":" + line(f, "k_sigmas") + ": alarms.k_sigmas: unknown key; did you mean"
             + " \"k_sigma\"?",
         f + ":" + line(f, "limit = \"1100 degC\"") + ": alarms.peak_high_high.limit: must be"

@@ -6,7 +6,9 @@ import static org.plateward.alarms.AlarmFixtures.T0;
 import static org.plateward.alarms.AlarmFixtures.plain;
 import static org.plateward.alarms.AlarmFixtures.settings;
 
+import java.util.ArrayList;
 import java.util.EnumSet;
+import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
 
@@ -53,6 +55,24 @@ class DesignSuppressionTest {
     board.removeFromService(T0, "op1", AlarmKind.PEAK_HIGH_HIGH, "limit under review");
     board.evaluate(everythingBad(0, "ok", false));
     assertThat(board.status(AlarmKind.PEAK_HIGH).state()).isEqualTo(AlarmState.UNACKNOWLEDGED);
+  }
+
+  @Test
+  void highHighShelvedDoesNotHideHigh() {
+    board.evaluate(everythingBad(0, "ok", false));
+    assertThat(board.status(AlarmKind.PEAK_HIGH).state())
+        .isEqualTo(AlarmState.SUPPRESSED_BY_DESIGN);
+    board.shelve(T0.plusSeconds(1), "op1", AlarmKind.PEAK_HIGH_HIGH, "trim under way",
+        T0.plusSeconds(600));
+    board.evaluate(everythingBad(2, "ok", false));
+    assertThat(board.status(AlarmKind.PEAK_HIGH).state()).isEqualTo(AlarmState.UNACKNOWLEDGED);
+  }
+
+  @Test
+  void theBoardReturnsWhatItSendsToTheAudit() {
+    List<AlarmEvent> returned = new ArrayList<>(board.evaluate(everythingBad(0, "ok", false)));
+    returned.addAll(board.evaluate(everythingBad(1, "untrustworthy", true)));
+    assertThat(returned).isNotEmpty().isEqualTo(audit.events);
   }
 
   @Test

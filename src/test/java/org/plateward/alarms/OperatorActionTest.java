@@ -148,6 +148,36 @@ class OperatorActionTest {
   }
 
   @Test
+  void anActionAfterTheExpiryFindsTheAlarmAlreadyUnshelved() {
+    hot(0);
+    board.shelve(at(1), "op1", AlarmKind.PEAK_HIGH, "trim under way", at(31));
+    // no estimate arrives (connection down); the operator acts after the expiry
+    ActionResult r = board.unshelve(at(40), "op1", AlarmKind.PEAK_HIGH, null);
+    assertThat(r.accepted()).isFalse();
+    assertThat(r.message()).isEqualTo("peak_high: the alarm is not shelved");
+    assertThat(board.status(AlarmKind.PEAK_HIGH).state()).isEqualTo(AlarmState.UNACKNOWLEDGED);
+    assertThat(audit.actions).hasSize(1);
+  }
+
+  @Test
+  void inputsMustNotGoBackInTime() {
+    hot(10);
+    org.assertj.core.api.Assertions.assertThatThrownBy(() -> cool(9))
+        .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("back in time");
+    assertThat(board.status(AlarmKind.PEAK_HIGH).state()).isEqualTo(AlarmState.UNACKNOWLEDGED);
+  }
+
+  @Test
+  void statusesAreSortedMostUrgentFirst() {
+    List<AlarmStatus> s = board.statuses();
+    assertThat(s).hasSize(AlarmKind.values().length);
+    assertThat(s.get(0).kind()).isEqualTo(AlarmKind.PEAK_HIGH_HIGH);
+    for (int i = 1; i < s.size(); i++) {
+      assertThat(s.get(i).priority()).isGreaterThanOrEqualTo(s.get(i - 1).priority());
+    }
+  }
+
+  @Test
   void aDisabledAlarmIsNotOnTheBoardAndCannotBeActedOn() {
     var defs = plain();
     defs.put(AlarmKind.HISTORY_NOT_KEPT, new AlarmDefinition(AlarmKind.HISTORY_NOT_KEPT, false,
