@@ -17,6 +17,11 @@ final class ErrorList {
     errors.add(new ConfigError(file, line, field, message));
   }
 
+  /** How many problems have been collected so far. */
+  int size() {
+    return errors.size();
+  }
+
   boolean isEmpty() {
     return errors.isEmpty();
   }
