@@ -19,6 +19,7 @@ final class GasTables {
   static final double MIN_K = 200.0;
   static final double MAX_K = 2600.0;
   private static final double STEP_K = 0.5;
+  private static final double INV_STEP = 1.0 / STEP_K;
   private static final int NODES = (int) Math.round((MAX_K - MIN_K) / STEP_K) + 1;
   private static final int NS = Species.COUNT;
   private static final int NC = XuFromentKinetics.CONSTANTS;
@@ -52,7 +53,7 @@ final class GasTables {
 
   /** Fills {@code out[0..n)} by interpolating {@code table} (n values per node) at T. */
   private static void interpolate(double[] table, int n, double tempK, double[] out) {
-    double u = (clamp(tempK) - MIN_K) / STEP_K;
+    double u = (clamp(tempK) - MIN_K) * INV_STEP;
     int i = Math.min((int) u, NODES - 2);
     double w = u - i;
     int a = i * n;

@@ -258,7 +258,10 @@ public final class MixtureProperties {
         double sum = 0.0;
         int row = phiOffset + i * N;
         for (int j = 0; j < N; j++) {
-          sum += moleFractions[j] * phi[row + j];
+          double xj = moleFractions[j];
+          if (xj != 0.0) {
+            sum += xj * phi[row + j];
+          }
         }
         lambda += x * pureConductivityWPerMK[i] / sum;
       }
