@@ -106,7 +106,7 @@ class DemoSessionTest {
 
     // the estimator sees one frame per plant second (opcua-demo.toml: frame_period = "1 s"),
     // though frames travel at 1/20 s of wall time
-    List<Estimate> first = new ArrayList<>(estimates.subList(0, 60));
+    List<Estimate> first = new ArrayList<>(estimates).subList(0, 60);
     for (int i = 1; i < first.size(); i++) {
       assertThat(Duration.between(first.get(i - 1).time(), first.get(i).time()).toMillis()).isEqualTo(1000);
     }
