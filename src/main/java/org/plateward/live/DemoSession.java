@@ -81,11 +81,14 @@ public final class DemoSession implements AutoCloseable {
           List.of(LiveMonitor.publishedName(cfg.unit().name())));
       say.accept("soft-sensor values: " + publisher.endpointUrl() + " (namespace "
           + publisher.namespaceUri() + ", read-only)");
-      TimeScale clock = new TimeScale(origin(Instant.now().plusMillis(1500), demoMap.framePeriodS() / speed),
-          scenario.start(), speed);
+      double wallPeriodS = demoMap.framePeriodS() / speed;
       LiveMonitor monitor = LiveMonitor.start(new LiveMonitor.Setup(cfg.unit(),
           scaled(demoMap, plant.endpointUrl(), speed), history, publisher, SourceKind.DEMO,
-          cfg.file() == null ? null : cfg.file().toString(), version, clock));
+          cfg.file() == null ? null : cfg.file().toString(), version,
+          new TimeScale(origin(Instant.now(), wallPeriodS), scenario.start(), speed)));
+      // plant time starts now that the monitor listens: frame 0 is served at the origin
+      TimeScale clock = new TimeScale(origin(Instant.now().plusMillis(300), wallPeriodS), scenario.start(), speed);
+      monitor.pinClock(clock);
       plant.begin(clock);
       say.accept("monitor: connected to " + plant.endpointUrl() + " over OPC UA");
       return new DemoSession(plant, publisher, history, monitor, clock);

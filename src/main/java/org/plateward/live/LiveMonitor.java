@@ -86,6 +86,7 @@ public final class LiveMonitor implements AutoCloseable {
   }
 
   private final Setup setup;
+  private volatile TimeScale clock;
   private final String unitName;
   private final ReactorSoftSensor sensor;
   private final ThreadPoolExecutor estimator;
@@ -108,6 +109,7 @@ public final class LiveMonitor implements AutoCloseable {
 
   private LiveMonitor(Setup setup) {
     this.setup = setup;
+    this.clock = setup.clock();
     this.unitName = publishedName(setup.unit().name());
     this.sensor = new ReactorSoftSensor(setup.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
     this.estimator =
@@ -129,7 +131,7 @@ public final class LiveMonitor implements AutoCloseable {
   public static LiveMonitor start(Setup setup) throws PlantConnectionException {
     LiveMonitor m = new LiveMonitor(setup);
     if (setup.history() != null) {
-      setup.history().appendRun(new RunRow(m.runId, setup.clock().toPlant(Instant.now()),
+      setup.history().appendRun(new RunRow(m.runId, m.clock.toPlant(Instant.now()),
           setup.source(), setup.configFile(), setup.unit().name(), setup.modelVersion()));
       m.lastHistory = setup.history().health().state();
     }
@@ -152,6 +154,19 @@ public final class LiveMonitor implements AutoCloseable {
   public static String publishedName(String unitName) {
     String s = unitName.replaceAll("[^A-Za-z0-9_-]+", "_");
     return s.isEmpty() ? "unit" : s;
+  }
+
+  /**
+   * Replaces the wall-to-plant clock before any data arrived (the demo starts its plant only once
+   * the monitor is connected, and pins plant time then).
+   *
+   * @throws IllegalStateException once a frame with a usable value has been seen
+   */
+  public void pinClock(TimeScale newClock) {
+    if (dataSeen) {
+      throw new IllegalStateException("the clock is fixed once data arrived");
+    }
+    this.clock = Objects.requireNonNull(newClock, "clock");
   }
 
   /** The estimator; the same instance for the monitor's whole life. */
@@ -196,7 +211,7 @@ public final class LiveMonitor implements AutoCloseable {
         dropped.get(),
         h == null ? null : h.health(),
         h == null ? null : h.settings().databaseFile(),
-        setup.clock(),
+        clock,
         now);
   }
 
@@ -229,19 +244,31 @@ public final class LiveMonitor implements AutoCloseable {
   private void onFrame(AlignedFrame f) {
     if (f.samplesUsed() > 0) {
       lastDataWall = Instant.now();
+    }
+    if (!dataSeen) {
+      if (!anyUsable(f.frame())) {
+        return; // estimation starts with the first frame that carries a usable value
+      }
       dataSeen = true;
-    } else if (!dataSeen) {
-      return; // estimation starts with the first frame that carries data
     }
     if (!estimator.isShutdown()) {
       estimator.execute(() -> estimate(f));
     }
   }
 
+  private static boolean anyUsable(Frame f) {
+    for (org.plateward.signals.Signal s : org.plateward.signals.Signal.values()) {
+      if (f.usable(s)) {
+        return true;
+      }
+    }
+    return false;
+  }
+
   // --- estimator thread ---------------------------------------------------------------------
 
   private void estimate(AlignedFrame aligned) {
-    Frame frame = setup.clock().toPlant(aligned.frame());
+    Frame frame = clock.toPlant(aligned.frame());
     HistoryRecorder h = setup.history();
     try {
       if (h != null) {
@@ -283,7 +310,7 @@ public final class LiveMonitor implements AutoCloseable {
   }
 
   private void tell(String what) {
-    String line = setup.clock().toPlant(Instant.now()).truncatedTo(java.time.temporal.ChronoUnit.SECONDS)
+    String line = clock.toPlant(Instant.now()).truncatedTo(java.time.temporal.ChronoUnit.SECONDS)
         + "  " + what;
     LOGGER.info("{}", what);
     for (Consumer<String> l : changeListeners) {
@@ -310,7 +337,7 @@ public final class LiveMonitor implements AutoCloseable {
     public void onGap(DataGap gap) {
       HistoryRecorder h = setup.history();
       if (h != null) {
-        h.appendGap(new GapRow(setup.clock().toPlant(gap.from()), setup.clock().toPlant(gap.to()),
+        h.appendGap(new GapRow(clock.toPlant(gap.from()), clock.toPlant(gap.to()),
             "OPC UA: " + gap.reason()));
       }
       tell(String.format(java.util.Locale.ROOT, "data gap of %.1f s (wall) stored: %s",
