@@ -26,8 +26,9 @@ import picocli.CommandLine.Option;
     name = "demo",
     mixinStandardHelpOptions = true,
     description = {
-      "Start the simulated plant (invented data) with a fuel surge, serve it over OPC UA on loopback,",
-      "and monitor it live: estimates to the console, to history and to the soft-sensor publisher."
+      "Run the simulated plant (invented data) through a fuel surge and monitor it live over OPC UA.",
+      "The plant is served on loopback; estimates go to the console, to history and to the",
+      "soft-sensor publisher. Advisory only."
     })
 public final class DemoCommand implements Callable<Integer> {
   /** The default upset: the fuel surge melts the buffer layer through within 25 plant minutes. */

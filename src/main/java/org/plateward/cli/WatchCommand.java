@@ -25,8 +25,8 @@ import picocli.CommandLine.Option;
     name = "watch",
     mixinStandardHelpOptions = true,
     description = {
-      "Monitor a plant live over OPC UA (read-only) per the [opcua] section of the configuration:",
-      "estimates to the console, to history and to the soft-sensor publisher. Advisory only."
+      "Monitor a plant live over OPC UA (read-only), per the [opcua] section of the configuration.",
+      "Estimates go to the console, to history and to the soft-sensor publisher. Advisory only."
     })
 public final class WatchCommand implements Callable<Integer> {
   @CommandLine.Mixin ConfigOption config;
