@@ -32,7 +32,8 @@ public final class PlatewardCommand implements Runnable {
    * object here.
    */
   static List<Supplier<Object>> subcommands() {
-    return List.of(CheckCommand::new, SteadyCommand::new, PlantCommand::new, ReplayCommand::new);
+    return List.of(CheckCommand::new, SteadyCommand::new, PlantCommand::new, ReplayCommand::new,
+        WatchCommand::new, DemoCommand::new);
   }
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

@@ -8,7 +8,9 @@ import java.util.concurrent.Callable;
 import org.plateward.Advisory;
 import org.plateward.config.PlatewardConfig;
 import org.plateward.estimation.FilterSettings;
+import java.time.Instant;
 import org.plateward.replay.EstimateWriter;
+import org.plateward.replay.HistoryFrameSource;
 import org.plateward.replay.ReplayFormatException;
 import org.plateward.replay.ReplayFrameSource;
 import org.plateward.softsensor.EstimationLoop;
@@ -26,14 +28,24 @@ import picocli.CommandLine.Option;
 @Command(
     name = "replay",
     mixinStandardHelpOptions = true,
-    description = "Run the estimator over a recorded period (a replay file) and summarise it.")
+    description = {"Run the estimator over a recorded period (a replay file, or a period of history)"
+        + " and summarise it.", "Either --input F.csv, or --db F --from T1 --to T2 (ISO 8601 times with zone)."})
 public final class ReplayCommand implements Callable<Integer> {
   @CommandLine.Mixin ConfigOption config;
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--input", required = true, paramLabel = "F.csv", description = "Replay file to run.")
+  @Option(names = "--input", paramLabel = "F.csv", description = "Replay file to run.")
   Path input;
+
+  @Option(names = "--db", paramLabel = "F", description = "History database to replay a period of.")
+  Path db;
+
+  @Option(names = "--from", paramLabel = "T1", description = "Start of the period (with --db), e.g. 2031-03-05T14:00:00Z.")
+  String from;
+
+  @Option(names = "--to", paramLabel = "T2", description = "End of the period (with --db, exclusive).")
+  String to;
 
   @Option(names = "--out", paramLabel = "estimates.csv", description = "Write one estimate per frame here.")
   Path out;
@@ -43,6 +55,16 @@ public final class ReplayCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    if ((input == null) == (db == null)) {
+      throw new CommandLine.ParameterException(spec.commandLine(),
+          "give either --input F.csv or --db F --from T1 --to T2");
+    }
+    if (db != null) {
+      return replayHistory();
+    }
+    if (from != null || to != null) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--from and --to go with --db");
+    }
     PlatewardConfig cfg = config.load();
     if (!Files.isReadable(input)) {
       throw new ReplayFormatException(input.toString(), 0, "--input", "no such file or not readable");
@@ -92,6 +114,84 @@ public final class ReplayCommand implements Callable<Integer> {
     }
     outText.flush();
     return 0;
+  }
+
+  /** {@code --db F --from T1 --to T2}: a period of history through the same estimator path. */
+  private int replayHistory() throws Exception {
+    if (from == null || to == null) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--db needs --from T1 and --to T2");
+    }
+    Instant t1 = instant("--from", from);
+    Instant t2 = instant("--to", to);
+    if (!t2.isAfter(t1)) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--to (" + t2 + ") must be after --from (" + t1 + ")");
+    }
+    PlatewardConfig cfg = config.load();
+    PrintWriter err = spec.commandLine().getErr();
+    PrintWriter outText = spec.commandLine().getOut();
+    if (!Files.isReadable(db)) {
+      err.println("plateward replay: " + db + ": no such file or not readable");
+      err.flush();
+      return PlatewardCommand.EXIT_BAD_INPUT;
+    }
+    ReactorSoftSensor sensor = new ReactorSoftSensor(cfg.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
+    EstimationLoop.Stats stats;
+    long[] byStatus = new long[org.plateward.softsensor.EstimatorStatus.values().length];
+    try (HistoryFrameSource src = HistoryFrameSource.open(db, t1, t2)) {
+      EstimateWriter w = out == null ? null : EstimateWriter.create(out, db.getFileName().toString());
+      try {
+        stats = EstimationLoop.run(src, sensor, (f, e, truth) -> {
+          byStatus[e.status().ordinal()]++;
+          if (w != null) {
+            w.write(e);
+          }
+        }, noProgress ? null : n -> {
+          err.print("\rreplayed " + n + " frames");
+          err.flush();
+        });
+      } finally {
+        if (w != null) {
+          w.close();
+        }
+      }
+    } catch (org.plateward.history.HistoryException e) {
+      err.println("plateward replay: " + e.getMessage());
+      err.flush();
+      return PlatewardCommand.EXIT_BAD_INPUT;
+    }
+    if (!noProgress && stats.frames() >= 1000) {
+      err.println();
+      err.flush();
+    }
+    outText.println(Advisory.SHORT);
+    if (stats.frames() == 0) {
+      outText.println("no frames stored in " + db + " between " + t1 + " and " + t2);
+      outText.flush();
+      return 0;
+    }
+    outText.printf(Locale.ROOT, "replayed %d frames from %s (%.1f min of data) in %.2f s: %.0f x real time%n",
+        stats.frames(), db, stats.spanS() / 60.0, stats.wallS(), stats.timesRealTime());
+    StringBuilder st = new StringBuilder("estimator status:");
+    for (org.plateward.softsensor.EstimatorStatus s : org.plateward.softsensor.EstimatorStatus.values()) {
+      st.append(' ').append(s.text()).append(' ').append(byStatus[s.ordinal()]);
+    }
+    outText.println(st);
+    outText.printf(Locale.ROOT, "filter steps %d, model Jacobian builds %d, analyzer results not placed %d, drift flags %d%n",
+        sensor.blocks(), sensor.jacobianBuilds(), sensor.droppedAnalyzerResults(), sensor.driftFlags().size());
+    if (out != null) {
+      outText.println("estimates written to " + out);
+    }
+    outText.flush();
+    return 0;
+  }
+
+  private Instant instant(String option, String text) {
+    try {
+      return java.time.OffsetDateTime.parse(text).toInstant();
+    } catch (java.time.format.DateTimeParseException e) {
+      throw new CommandLine.ParameterException(spec.commandLine(),
+          option + ": not an ISO 8601 time with zone such as 2031-03-05T14:00:00Z, got '" + text + "'");
+    }
   }
 
   /** The recording's {@code unit=} metadata must name the configured unit when present. */

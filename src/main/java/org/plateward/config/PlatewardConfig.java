@@ -17,8 +17,10 @@ import org.plateward.reactor.UnitSpec;
  * @param file the file as the user named it
  * @param unit the reactor unit, SI
  * @param history how history is kept (the optional {@code [history]} table)
+ * @param opcua how to reach the plant's OPC UA server and its tag map (the optional {@code
+ *     [opcua]} section); null when the file has none
  */
-public record PlatewardConfig(Path file, UnitSpec unit, HistorySettings history) {
+public record PlatewardConfig(Path file, UnitSpec unit, HistorySettings history, OpcuaSettings opcua) {
   /** The file every command reads unless told otherwise. */
   public static final Path DEFAULT_FILE = Path.of("config", "plateward.toml");
 
@@ -35,7 +37,8 @@ public record PlatewardConfig(Path file, UnitSpec unit, HistorySettings history)
     ErrorList errors = new ErrorList(file);
     UnitSpec unit = UnitConfigLoader.read(doc, errors);
     HistorySettings history = HistoryConfigReader.read(doc, errors);
+    OpcuaSettings opcua = OpcuaSettings.read(doc, errors);
     errors.throwIfAny();
-    return new PlatewardConfig(file, unit, history);
+    return new PlatewardConfig(file, unit, history, opcua);
   }
 }

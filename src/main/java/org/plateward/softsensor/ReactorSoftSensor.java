@@ -171,6 +171,22 @@ public final class ReactorSoftSensor {
     return ekf == null ? null : ekf.covariance();
   }
 
+  /**
+   * Plate temperature of each cell from the present state estimate, K (posterior mean mapped
+   * through the enthalpy-temperature relation), or null before the start.
+   */
+  public double[] cellTempK() {
+    if (ekf == null) {
+      return null;
+    }
+    double[] x = ekf.state();
+    double[] tK = new double[cells];
+    for (int j = 0; j < cells; j++) {
+      tK[j] = plate.tempK(x[j] * capacity);
+    }
+    return tK;
+  }
+
   /** Number of filter steps (blocks) so far. */
   public long blocks() {
     return blocks;

@@ -1,0 +1,119 @@
+package org.plateward.cli;
+
+import java.io.PrintWriter;
+import java.util.concurrent.Callable;
+import org.plateward.Advisory;
+import org.plateward.config.PlatewardConfig;
+import org.plateward.history.HistoryRecorder;
+import org.plateward.history.SourceKind;
+import org.plateward.live.ConsoleView;
+import org.plateward.live.LiveMonitor;
+import org.plateward.live.TimeScale;
+import org.plateward.opcua.EndpointPortInUseException;
+import org.plateward.opcua.EstimatePublisher;
+import org.plateward.opcua.PlantConnectionException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/**
+ * {@code plateward watch}: live monitoring of the plant named in the configuration's {@code
+ * [opcua]} section, with history and the soft-sensor publisher; a console view until the window
+ * exists.
+ */
+@Command(
+    name = "watch",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Monitor a plant live over OPC UA (read-only), per the [opcua] section of the configuration.",
+      "Estimates go to the console, to history and to the soft-sensor publisher. Advisory only."
+    })
+public final class WatchCommand implements Callable<Integer> {
+  @CommandLine.Mixin ConfigOption config;
+
+  @CommandLine.Spec CommandLine.Model.CommandSpec spec;
+
+  @Option(names = "--headless", description = "Console only, no window.")
+  boolean headless;
+
+  @Option(names = "--duration", paramLabel = "D", description = "Stop after this long, e.g. \"8 h\" (default: until Ctrl-C).")
+  String duration;
+
+  @Option(names = "--publish-port", paramLabel = "P", defaultValue = "" + EstimatePublisher.DEFAULT_PORT,
+      description = "Port of the soft-sensor publisher on 127.0.0.1 (0 = any free port; default ${DEFAULT-VALUE}).")
+  int publishPort;
+
+  @Option(names = "--refresh", paramLabel = "S", defaultValue = "5",
+      description = "Seconds between status blocks (default ${DEFAULT-VALUE}).")
+  double refreshS;
+
+  @Override
+  public Integer call() throws Exception {
+    double durationS = LiveRun.durationS(spec, duration);
+    PlatewardConfig cfg = config.load();
+    PrintWriter err = spec.commandLine().getErr();
+    PrintWriter out = spec.commandLine().getOut();
+    if (cfg.opcua() == null) {
+      err.println("plateward watch: " + cfg.file() + " has no [opcua] section, so there is no plant to "
+          + "watch. Add one naming the endpoint and the tag map (config/opcua-demo.toml is the one for "
+          + "the simulated plant), or run 'plateward demo' to watch the simulated plant.");
+      err.flush();
+      return PlatewardCommand.EXIT_BAD_INPUT;
+    }
+    if (!(refreshS > 0.0)) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--refresh: must be positive, got " + refreshS);
+    }
+    out.println(Advisory.SHORT);
+    if (!headless) {
+      out.println("plateward watch: the window comes with a later version; running headless (console).");
+    }
+    out.flush();
+    HistoryRecorder history = HistoryRecorder.start(cfg.history());
+    EstimatePublisher publisher = null;
+    LiveMonitor monitor = null;
+    ConsoleView view = null;
+    LiveRun run = new LiveRun();
+    try {
+      out.println("history: " + cfg.history().databaseFile().toAbsolutePath()
+          + (history.health().ok() ? "" : " - NOT KEEPING: " + history.health().reason()));
+      try {
+        publisher = EstimatePublisher.start("127.0.0.1", publishPort, EstimatePublisher.DEFAULT_NAMESPACE_URI,
+            java.util.List.of(LiveMonitor.publishedName(cfg.unit().name())));
+      } catch (EndpointPortInUseException e) {
+        err.println("plateward watch: soft-sensor publisher: " + e.getMessage()
+            + " (choose another with --publish-port)");
+        return PlatewardCommand.EXIT_BAD_INPUT;
+      }
+      out.println("soft-sensor values: " + publisher.endpointUrl() + " (read-only)");
+      out.println("connecting to " + cfg.opcua().endpointUrl() + " ...");
+      out.flush();
+      try {
+        monitor = LiveMonitor.start(new LiveMonitor.Setup(cfg.unit(), cfg.opcua(), history, publisher,
+            SourceKind.LIVE, cfg.file().toString(), PlatewardVersion.version(), TimeScale.REAL_TIME));
+      } catch (PlantConnectionException e) {
+        err.println("plateward watch: " + e.getMessage());
+        return PlatewardCommand.EXIT_INTERNAL;
+      }
+      view = ConsoleView.start(monitor, out, refreshS);
+      String why = run.await(durationS, () -> false);
+      out.println("plateward watch: stopping (" + why + ")");
+      out.flush();
+      return 0;
+    } finally {
+      if (view != null) {
+        view.close();
+      }
+      if (monitor != null) {
+        monitor.close();
+      }
+      if (publisher != null) {
+        publisher.close();
+      }
+      history.flush(java.time.Duration.ofSeconds(10));
+      history.close();
+      out.println("plateward watch: history flushed to " + cfg.history().databaseFile());
+      out.flush();
+      run.done(err);
+    }
+  }
+}

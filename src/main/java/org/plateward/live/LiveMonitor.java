@@ -1,0 +1,397 @@
+package org.plateward.live;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeMap;
+import java.util.UUID;
+import java.util.concurrent.ArrayBlockingQueue;
+import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.ThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Consumer;
+import org.plateward.estimation.FilterSettings;
+import org.plateward.history.EstimateRow;
+import org.plateward.history.GapRow;
+import org.plateward.history.HistoryHealth;
+import org.plateward.history.HistoryRecorder;
+import org.plateward.history.RunRow;
+import org.plateward.history.SourceKind;
+import org.plateward.opcua.AlignedFrame;
+import org.plateward.opcua.ConnectionListener;
+import org.plateward.opcua.ConnectionState;
+import org.plateward.opcua.DataGap;
+import org.plateward.opcua.EstimatePublisher;
+import org.plateward.opcua.PlantConnection;
+import org.plateward.opcua.PlantConnectionException;
+import org.plateward.opcua.PublishedEstimate;
+import org.plateward.config.OpcuaSettings;
+import org.plateward.reactor.UnitSpec;
+import org.plateward.signals.Frame;
+import org.plateward.softsensor.Estimate;
+import org.plateward.softsensor.EstimatorStatus;
+import org.plateward.softsensor.ReactorSoftSensor;
+import org.plateward.softsensor.SoftSensorSettings;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * The live path: aligned frames from a {@link PlantConnection} go through one {@link
+ * ReactorSoftSensor} on the monitor's own estimator thread (never on a Milo or connection
+ * thread); each frame and its estimate go to history, the estimate to the soft-sensor publisher
+ * and to the listeners. Gaps the connection reports are stored as gap rows; one run row is
+ * stored at start.
+ *
+ * <p>The estimator is never reset: across a reconnect it keeps its state, and the frames of the
+ * gap (every signal MISSING) make it predict without correction, so the estimate is degraded
+ * and its uncertainty grows until data return.
+ *
+ * <p>History and publisher are optional and owned by the caller (closed after the monitor).
+ */
+public final class LiveMonitor implements AutoCloseable {
+  private static final Logger LOGGER = LoggerFactory.getLogger(LiveMonitor.class);
+  /** Frames that may wait for the estimator: ten minutes at 1 Hz. */
+  private static final int BACKLOG = 600;
+
+  /**
+   * What the monitor is built from.
+   *
+   * @param unit the reactor unit (its name labels the published nodes)
+   * @param opcua connection and tag map
+   * @param history where frames, estimates, gaps and the run go (null: not kept)
+   * @param publisher where estimates are republished (null: not published)
+   * @param source live or demo, for the run row
+   * @param configFile the configuration file, for the run row (may be null)
+   * @param modelVersion program version, for the run row (may be null)
+   * @param clock wall clock to plant time
+   */
+  public record Setup(
+      UnitSpec unit,
+      OpcuaSettings opcua,
+      HistoryRecorder history,
+      EstimatePublisher publisher,
+      SourceKind source,
+      String configFile,
+      String modelVersion,
+      TimeScale clock) {
+    public Setup {
+      Objects.requireNonNull(unit, "unit");
+      Objects.requireNonNull(opcua, "opcua");
+      Objects.requireNonNull(source, "source");
+      Objects.requireNonNull(clock, "clock");
+    }
+  }
+
+  private final Setup setup;
+  private volatile TimeScale clock;
+  private final String unitName;
+  private final ReactorSoftSensor sensor;
+  private final ThreadPoolExecutor estimator;
+  private final List<Consumer<String>> changeListeners = new CopyOnWriteArrayList<>();
+  private final List<Consumer<Estimate>> estimateListeners = new CopyOnWriteArrayList<>();
+  private final AtomicLong dropped = new AtomicLong();
+  private final AtomicLong frames = new AtomicLong();
+  private final String runId = UUID.randomUUID().toString();
+  private volatile PlantConnection connection;
+  private volatile ConnectionState link = ConnectionState.CONNECTING;
+  private volatile String linkReason = "";
+  private volatile Instant lastDataWall;
+  private volatile Estimate latest;
+  private volatile long blocks;
+  private volatile boolean closed;
+  private volatile boolean dataSeen;
+  // estimator thread only
+  private EstimatorStatus lastStatus;
+  private HistoryHealth.State lastHistory = HistoryHealth.State.OK;
+
+  private LiveMonitor(Setup setup) {
+    this.setup = setup;
+    this.clock = setup.clock();
+    this.unitName = publishedName(setup.unit().name());
+    this.sensor = new ReactorSoftSensor(setup.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
+    this.estimator =
+        new ThreadPoolExecutor(1, 1, 0L, TimeUnit.MILLISECONDS, new ArrayBlockingQueue<>(BACKLOG),
+            r -> {
+              Thread t = new Thread(r, "plateward-estimator");
+              t.setDaemon(true);
+              return t;
+            },
+            (r, ex) -> dropped.incrementAndGet());
+  }
+
+  /**
+   * Stores the run row, connects to the plant and starts estimating. Returns once the first
+   * session is active.
+   *
+   * @throws PlantConnectionException with a plain message when the endpoint cannot be used
+   */
+  public static LiveMonitor start(Setup setup) throws PlantConnectionException {
+    LiveMonitor m = new LiveMonitor(setup);
+    if (setup.history() != null) {
+      setup.history().appendRun(new RunRow(m.runId, m.clock.toPlant(Instant.now()),
+          setup.source(), setup.configFile(), setup.unit().name(), setup.modelVersion()));
+      m.lastHistory = setup.history().health().state();
+    }
+    try {
+      m.connection = PlantConnection.open(setup.opcua(), m::onFrame, m.new Link());
+    } catch (PlantConnectionException e) {
+      m.estimator.shutdownNow();
+      throw e;
+    }
+    if (m.connection.state() == ConnectionState.CONNECTED) {
+      m.link = ConnectionState.CONNECTED;
+    }
+    for (String p : m.connection.tagProblems()) {
+      m.tell("tag problem: " + p);
+    }
+    return m;
+  }
+
+  /** The name the unit's nodes are published under (letters, digits, '-' and '_'). */
+  public static String publishedName(String unitName) {
+    String s = unitName.replaceAll("[^A-Za-z0-9_-]+", "_");
+    return s.isEmpty() ? "unit" : s;
+  }
+
+  /**
+   * Replaces the wall-to-plant clock before any data arrived (the demo starts its plant only once
+   * the monitor is connected, and pins plant time then).
+   *
+   * @throws IllegalStateException once a frame with a usable value has been seen
+   */
+  public void pinClock(TimeScale newClock) {
+    if (dataSeen) {
+      throw new IllegalStateException("the clock is fixed once data arrived");
+    }
+    this.clock = Objects.requireNonNull(newClock, "clock");
+  }
+
+  /** The estimator; the same instance for the monitor's whole life. */
+  public ReactorSoftSensor sensor() {
+    return sensor;
+  }
+
+  /** The connection to the plant. */
+  public PlantConnection connection() {
+    return connection;
+  }
+
+  /** Id of the run row stored at start. */
+  public String runId() {
+    return runId;
+  }
+
+  /** Receives a line of plain words whenever the link, estimator or history status changes. */
+  public void addChangeListener(Consumer<String> l) {
+    changeListeners.add(l);
+  }
+
+  /** Receives every estimate, on the estimator thread; keep it short. */
+  public void addEstimateListener(Consumer<Estimate> l) {
+    estimateListeners.add(l);
+  }
+
+  /** A consistent look at the monitor now. */
+  public MonitorStatus status() {
+    Instant now = Instant.now();
+    Instant data = lastDataWall;
+    HistoryRecorder h = setup.history();
+    return new MonitorStatus(
+        setup.unit().name(),
+        setup.opcua().endpointUrl(),
+        link,
+        linkReason,
+        data == null ? Double.NaN : (now.toEpochMilli() - data.toEpochMilli()) / 1000.0,
+        latest,
+        frames.get(),
+        blocks,
+        dropped.get(),
+        h == null ? null : h.health(),
+        h == null ? null : h.settings().databaseFile(),
+        clock,
+        now);
+  }
+
+  /** Stops the connection, then lets the estimator finish the frames it holds (up to 10 s). */
+  @Override
+  public void close() {
+    if (closed) {
+      return;
+    }
+    closed = true;
+    PlantConnection c = connection;
+    if (c != null) {
+      c.close();
+    }
+    estimator.shutdown();
+    try {
+      if (!estimator.awaitTermination(10, TimeUnit.SECONDS)) {
+        LOGGER.warn("estimator still busy after 10 s; {} frames left unestimated",
+            estimator.getQueue().size());
+        estimator.shutdownNow();
+      }
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      estimator.shutdownNow();
+    }
+  }
+
+  // --- frame thread: hand on and return -----------------------------------------------------
+
+  private void onFrame(AlignedFrame f) {
+    if (f.samplesUsed() > 0) {
+      lastDataWall = Instant.now();
+    }
+    if (!dataSeen) {
+      if (!anyUsable(f.frame())) {
+        return; // estimation starts with the first frame that carries a usable value
+      }
+      dataSeen = true;
+    }
+    if (!estimator.isShutdown()) {
+      estimator.execute(() -> estimate(f));
+    }
+  }
+
+  private static boolean anyUsable(Frame f) {
+    for (org.plateward.signals.Signal s : org.plateward.signals.Signal.values()) {
+      if (f.usable(s)) {
+        return true;
+      }
+    }
+    return false;
+  }
+
+  // --- estimator thread ---------------------------------------------------------------------
+
+  private void estimate(AlignedFrame aligned) {
+    Frame frame = clock.toPlant(aligned.frame());
+    HistoryRecorder h = setup.history();
+    try {
+      if (h != null) {
+        h.appendFrame(frame);
+      }
+      Estimate e = sensor.accept(frame);
+      blocks = sensor.blocks();
+      latest = e;
+      frames.incrementAndGet();
+      if (h != null) {
+        h.appendEstimate(row(e, sensor.cellTempK()));
+      }
+      if (setup.publisher() != null) {
+        setup.publisher().publish(unitName, published(e));
+      }
+      for (Consumer<Estimate> l : estimateListeners) {
+        l.accept(e);
+      }
+      noticeChanges(e, h);
+    } catch (RuntimeException ex) {
+      LOGGER.error("estimate of the frame at {} failed; the next frame continues", frame.time(), ex);
+    }
+  }
+
+  private void noticeChanges(Estimate e, HistoryRecorder h) {
+    if (e.status() != lastStatus) {
+      String reason = e.reason() == null || e.reason().isEmpty() ? "" : ": " + e.reason();
+      tell("estimator " + (lastStatus == null ? "" : lastStatus.text() + " -> ") + e.status().text() + reason);
+      lastStatus = e.status();
+    }
+    if (h != null) {
+      HistoryHealth hh = h.health();
+      if (hh.state() != lastHistory) {
+        tell("history " + StatusBlock.historyWord(lastHistory) + " -> " + StatusBlock.historyWord(hh.state())
+            + (hh.reason() == null ? "" : ": " + hh.reason()));
+        lastHistory = hh.state();
+      }
+    }
+  }
+
+  private void tell(String what) {
+    String line = clock.toPlant(Instant.now()).truncatedTo(java.time.temporal.ChronoUnit.SECONDS)
+        + "  " + what;
+    LOGGER.info("{}", what);
+    for (Consumer<String> l : changeListeners) {
+      try {
+        l.accept(line);
+      } catch (RuntimeException ex) {
+        LOGGER.warn("change listener failed: {}", ex.toString());
+      }
+    }
+  }
+
+  /** Hears the connection (on the connection's control thread). */
+  private final class Link implements ConnectionListener {
+    @Override
+    public void onStateChanged(ConnectionState from, ConnectionState to, String reason) {
+      link = to;
+      linkReason = reason == null ? "" : reason;
+      if (!closed) {
+        tell("link " + from + " -> " + to + (reason == null ? "" : ": " + reason));
+      }
+    }
+
+    @Override
+    public void onGap(DataGap gap) {
+      HistoryRecorder h = setup.history();
+      if (h != null) {
+        h.appendGap(new GapRow(clock.toPlant(gap.from()), clock.toPlant(gap.to()),
+            "OPC UA: " + gap.reason()));
+      }
+      tell(String.format(java.util.Locale.ROOT, "data gap of %.1f s (wall) stored: %s",
+          gap.length().toMillis() / 1000.0, gap.reason()));
+    }
+  }
+
+  // --- mapping --------------------------------------------------------------------------------
+
+  /**
+   * What history keeps of an estimate: the scalars, the tracked parameters and the profiles.
+   *
+   * @param e the estimate
+   * @param cellTempK the estimator's cell temperatures at the same time, K (null before start)
+   */
+  static EstimateRow row(Estimate e, double[] cellTempK) {
+    Map<String, Double> p = new TreeMap<>();
+    p.put("reforming_activity", e.reformingActivity());
+    p.put("combustion_activity", e.combustionActivity());
+    p.put("heat_loss_w_m2k", e.heatLossWPerM2K());
+    p.put("heat_transfer_multiplier", e.heatTransferMultiplier());
+    p.put("plate_end_bias_ref_inlet_k", e.biasInletK());
+    p.put("plate_end_bias_ref_outlet_k", e.biasOutletK());
+    double[] melt = e.cellMeltFraction();
+    double[] temps = cellTempK;
+    if (temps == null) {
+      temps = new double[melt.length];
+      java.util.Arrays.fill(temps, Double.NaN);
+    }
+    return new EstimateRow(e.time(), e.peakPlateTempK(), e.peakPlateTempSdK(), e.peakPositionM(),
+        e.bufferMeltFraction(), e.bufferMeltFractionSd(), e.maxCellMeltFraction(),
+        e.timeToExhaustS(), e.timeToExhaustSdS(), e.nis(), e.status().text(),
+        e.reason() == null || e.reason().isEmpty() ? null : e.reason(), p, temps, melt);
+  }
+
+  /**
+   * What the publisher serves: degC for the peak, and a time-to-exhaust of +Inf when the
+   * estimator runs but forecasts no melt-through within its horizon.
+   */
+  static PublishedEstimate published(Estimate e) {
+    boolean running = Double.isFinite(e.peakPlateTempK());
+    double tte = e.timeToExhaustS();
+    double tteSd = e.timeToExhaustSdS();
+    if (running && Double.isNaN(tte)) {
+      tte = Double.POSITIVE_INFINITY;
+      tteSd = Double.NaN;
+    }
+    return new PublishedEstimate(e.time(), e.peakPlateTempK() - 273.15, e.peakPlateTempSdK(),
+        e.peakPositionM(), e.bufferMeltFraction(), e.maxCellMeltFraction(), tte, tteSd,
+        e.status().text() + (e.reason() == null || e.reason().isEmpty() ? "" : ": " + e.reason()), 0);
+  }
+
+  /** Where history is kept (for messages). */
+  public Path historyFile() {
+    return setup.history() == null ? null : setup.history().settings().databaseFile();
+  }
+}
