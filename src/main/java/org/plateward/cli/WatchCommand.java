@@ -89,7 +89,7 @@ public final class WatchCommand implements Callable<Integer> {
       out.flush();
       try {
         monitor = LiveMonitor.start(new LiveMonitor.Setup(cfg.unit(), cfg.opcua(), history, publisher,
-            SourceKind.LIVE, cfg.file().toString(), PlatewardVersion.version(), TimeScale.REAL_TIME));
+            SourceKind.LIVE, cfg.file().toString(), PlatewardVersion.version(), TimeScale.REAL_TIME, cfg.alarms()));
       } catch (PlantConnectionException e) {
         err.println("plateward watch: " + e.getMessage());
         return PlatewardCommand.EXIT_INTERNAL;

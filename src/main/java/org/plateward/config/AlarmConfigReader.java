@@ -45,7 +45,7 @@ public final class AlarmConfigReader {
   private AlarmConfigReader() {}
 
   /**
-   * Reads a file holding an {@code [alarms]} table (e.g. {@code config/alarms-demo.toml}).
+   * Reads a file holding an {@code [alarms]} table (e.g. {@code config/plateward.toml}).
    *
    * @throws InvalidConfigException with every problem found; nothing is returned then
    */
@@ -59,6 +59,9 @@ public final class AlarmConfigReader {
 
   /** Reads {@code [alarms]}; problems go to {@code errors}, and then the result is null. */
   static AlarmSettings read(TomlDocument doc, ErrorList errors) {
+    if (doc.root().get(TABLE) == null) {
+      return null; // the section is optional in a full configuration
+    }
     List<String> all = new ArrayList<>(KEYS);
     for (AlarmKind k : AlarmKind.values()) {
       all.add("[alarms." + k.key() + "]");

@@ -1,5 +1,7 @@
 package org.plateward.config;
 
+import org.plateward.alarms.AlarmSettings;
+
 import java.nio.file.Path;
 import org.plateward.history.HistorySettings;
 import org.plateward.reactor.UnitSpec;
@@ -19,8 +21,11 @@ import org.plateward.reactor.UnitSpec;
  * @param history how history is kept (the optional {@code [history]} table)
  * @param opcua how to reach the plant's OPC UA server and its tag map (the optional {@code
  *     [opcua]} section); null when the file has none
+ * @param alarms the advisory alarm definitions (the optional {@code [alarms]} section); null
+ *     when the file has none
  */
-public record PlatewardConfig(Path file, UnitSpec unit, HistorySettings history, OpcuaSettings opcua) {
+public record PlatewardConfig(
+    Path file, UnitSpec unit, HistorySettings history, OpcuaSettings opcua, AlarmSettings alarms) {
   /** The file every command reads unless told otherwise. */
   public static final Path DEFAULT_FILE = Path.of("config", "plateward.toml");
 
@@ -38,7 +43,8 @@ public record PlatewardConfig(Path file, UnitSpec unit, HistorySettings history,
     UnitSpec unit = UnitConfigLoader.read(doc, errors);
     HistorySettings history = HistoryConfigReader.read(doc, errors);
     OpcuaSettings opcua = OpcuaSettings.read(doc, errors);
+    AlarmSettings alarms = AlarmConfigReader.read(doc, errors);
     errors.throwIfAny();
-    return new PlatewardConfig(file, unit, history, opcua);
+    return new PlatewardConfig(file, unit, history, opcua, alarms);
   }
 }

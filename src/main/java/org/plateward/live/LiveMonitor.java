@@ -1,5 +1,16 @@
 package org.plateward.live;
 
+import java.util.Set;
+import java.util.TreeSet;
+import org.plateward.alarms.AlarmAudit;
+import org.plateward.alarms.AlarmBoard;
+import org.plateward.alarms.AlarmEvent;
+import org.plateward.alarms.AlarmInputs;
+import org.plateward.alarms.AlarmSettings;
+import org.plateward.alarms.AlarmState;
+import org.plateward.alarms.AlarmStatus;
+import org.plateward.alarms.HistoryAlarmAudit;
+import org.plateward.signals.Quality;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
@@ -67,6 +78,7 @@ public final class LiveMonitor implements AutoCloseable {
    * @param configFile the configuration file, for the run row (may be null)
    * @param modelVersion program version, for the run row (may be null)
    * @param clock wall clock to plant time
+   * @param alarms advisory alarm definitions (null: no alarms are judged)
    */
   public record Setup(
       UnitSpec unit,
@@ -76,7 +88,8 @@ public final class LiveMonitor implements AutoCloseable {
       SourceKind source,
       String configFile,
       String modelVersion,
-      TimeScale clock) {
+      TimeScale clock,
+      AlarmSettings alarms) {
     public Setup {
       Objects.requireNonNull(unit, "unit");
       Objects.requireNonNull(opcua, "opcua");
@@ -89,6 +102,8 @@ public final class LiveMonitor implements AutoCloseable {
   private volatile TimeScale clock;
   private final String unitName;
   private final ReactorSoftSensor sensor;
+  private final AlarmBoard alarms;
+  private volatile List<AlarmStatus> alarmStatuses = List.of();
   private final ThreadPoolExecutor estimator;
   private final List<Consumer<String>> changeListeners = new CopyOnWriteArrayList<>();
   private final List<Consumer<Estimate>> estimateListeners = new CopyOnWriteArrayList<>();
@@ -112,6 +127,8 @@ public final class LiveMonitor implements AutoCloseable {
     this.clock = setup.clock();
     this.unitName = publishedName(setup.unit().name());
     this.sensor = new ReactorSoftSensor(setup.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
+    this.alarms = setup.alarms() == null ? null : new AlarmBoard(setup.alarms(),
+        setup.history() == null ? AlarmAudit.NONE : new HistoryAlarmAudit(setup.history()));
     this.estimator =
         new ThreadPoolExecutor(1, 1, 0L, TimeUnit.MILLISECONDS, new ArrayBlockingQueue<>(BACKLOG),
             r -> {
@@ -212,7 +229,8 @@ public final class LiveMonitor implements AutoCloseable {
         h == null ? null : h.health(),
         h == null ? null : h.settings().databaseFile(),
         clock,
-        now);
+        now,
+        alarmStatuses);
   }
 
   /** Stops the connection, then lets the estimator finish the frames it holds (up to 10 s). */
@@ -281,8 +299,9 @@ public final class LiveMonitor implements AutoCloseable {
       if (h != null) {
         h.appendEstimate(row(e, sensor.cellTempK()));
       }
+      int active = judgeAlarms(e, aligned, h);
       if (setup.publisher() != null) {
-        setup.publisher().publish(unitName, published(e));
+        setup.publisher().publish(unitName, published(e, active));
       }
       for (Consumer<Estimate> l : estimateListeners) {
         l.accept(e);
@@ -291,6 +310,34 @@ public final class LiveMonitor implements AutoCloseable {
     } catch (RuntimeException ex) {
       LOGGER.error("estimate of the frame at {} failed; the next frame continues", frame.time(), ex);
     }
+  }
+
+  /** Judges the advisory alarms on this estimate; returns how many are active. */
+  private int judgeAlarms(Estimate e, AlignedFrame aligned, HistoryRecorder h) {
+    if (alarms == null) {
+      return 0;
+    }
+    Set<String> badOrStale = new TreeSet<>();
+    for (org.plateward.signals.Signal s : org.plateward.signals.Signal.values()) {
+      if (aligned.frame().quality(s) == Quality.BAD || aligned.stale().contains(s)) {
+        badOrStale.add(s.id());
+      }
+    }
+    AlarmInputs in = new AlarmInputs(e.time(), e.peakPlateTempK(), e.peakPlateTempSdK(),
+        e.maxCellMeltFraction(), e.timeToExhaustS(), e.status().text(), badOrStale,
+        link != ConnectionState.CONNECTED,
+        h != null && h.health().state() == HistoryHealth.State.NOT_KEEPING);
+    for (AlarmEvent ev : alarms.evaluate(in)) {
+      tell("alarm " + ev.alarm().key() + " [" + ev.priority().key() + "] " + ev.transition() + ": " + ev.message());
+    }
+    alarmStatuses = alarms.statuses();
+    int active = 0;
+    for (AlarmStatus st : alarmStatuses) {
+      if (st.state() == AlarmState.UNACKNOWLEDGED || st.state() == AlarmState.ACKNOWLEDGED) {
+        active++;
+      }
+    }
+    return active;
   }
 
   private void noticeChanges(Estimate e, HistoryRecorder h) {
@@ -377,7 +424,7 @@ public final class LiveMonitor implements AutoCloseable {
    * What the publisher serves: degC for the peak, and a time-to-exhaust of +Inf when the
    * estimator runs but forecasts no melt-through within its horizon.
    */
-  static PublishedEstimate published(Estimate e) {
+  static PublishedEstimate published(Estimate e, int activeAlarms) {
     boolean running = Double.isFinite(e.peakPlateTempK());
     double tte = e.timeToExhaustS();
     double tteSd = e.timeToExhaustSdS();
@@ -387,7 +434,7 @@ public final class LiveMonitor implements AutoCloseable {
     }
     return new PublishedEstimate(e.time(), e.peakPlateTempK() - 273.15, e.peakPlateTempSdK(),
         e.peakPositionM(), e.bufferMeltFraction(), e.maxCellMeltFraction(), tte, tteSd,
-        e.status().text() + (e.reason() == null || e.reason().isEmpty() ? "" : ": " + e.reason()), 0);
+        e.status().text() + (e.reason() == null || e.reason().isEmpty() ? "" : ": " + e.reason()), activeAlarms);
   }
 
   /** Where history is kept (for messages). */

@@ -1,5 +1,7 @@
 package org.plateward.live;
 
+import java.util.List;
+import org.plateward.alarms.AlarmStatus;
 import java.nio.file.Path;
 import java.time.Instant;
 import org.plateward.history.HistoryHealth;
@@ -22,6 +24,7 @@ import org.plateward.softsensor.Estimate;
  * @param historyFile the history database
  * @param clock how plant time relates to the wall clock
  * @param wallNow when this look was taken
+ * @param alarms the advisory alarms, most urgent first (empty when none are judged)
  */
 public record MonitorStatus(
     String unitName,
@@ -36,4 +39,9 @@ public record MonitorStatus(
     HistoryHealth history,
     Path historyFile,
     TimeScale clock,
-    Instant wallNow) {}
+    Instant wallNow,
+    List<AlarmStatus> alarms) {
+  public MonitorStatus {
+    alarms = alarms == null ? List.of() : List.copyOf(alarms);
+  }
+}

@@ -1,5 +1,7 @@
 package org.plateward.live;
 
+import org.plateward.alarms.AlarmState;
+import org.plateward.alarms.AlarmStatus;
 import java.util.Locale;
 import org.plateward.Advisory;
 import org.plateward.history.HistoryHealth;
@@ -59,7 +61,25 @@ public final class StatusBlock {
     }
     b.append(String.format(Locale.ROOT, "   frames %d, filter steps %d%s%n", s.frames(), s.blocks(),
         s.droppedFrames() > 0 ? ", " + s.droppedFrames() + " frames dropped (estimator behind)" : ""));
+    alarmLines(b, s.alarms());
     return b.toString();
+  }
+
+  /** One line per alarm that is not normal: priority in words, state, value against limit. */
+  private static void alarmLines(StringBuilder b, java.util.List<AlarmStatus> alarms) {
+    int shown = 0;
+    for (AlarmStatus a : alarms) {
+      if (a.state() == AlarmState.NORMAL) {
+        continue;
+      }
+      shown++;
+      b.append(String.format(Locale.ROOT, "   ALARM %-9s %-24s %-26s%s%n", a.priority().key().toUpperCase(Locale.ROOT),
+          a.kind().key(), a.state().name().toLowerCase(Locale.ROOT).replace('_', ' '),
+          Double.isFinite(a.limit()) ? String.format(Locale.ROOT, " value %s, limit %s", num(a.value()), num(a.limit())) : ""));
+    }
+    if (shown == 0 && !alarms.isEmpty()) {
+      b.append("   alarms      none active\n");
+    }
   }
 
   private static String timeToExhaust(Estimate e) {

@@ -20,7 +20,7 @@ import org.plateward.config.InvalidConfigException;
  * with nothing returned.
  */
 class AlarmConfigTest {
-  static final Path DEMO = Path.of("config", "alarms-demo.toml");
+  static final Path DEMO = Path.of("config", "plateward.toml");
   @TempDir Path dir;
 
   private Path demoWith(String from, String to) throws Exception {

@@ -41,6 +41,12 @@ class LiveFaultTest {
       String block = StatusBlock.render(st);
       assertThat(block).contains("history     NOT KEEPING").contains(data.resolve("plateward.db").toString())
           .contains("hidden peak");
+      // and an advisory alarm says so (on-delay 30 s of plant time, config/plateward.toml)
+      assertThat(st.alarms()).anySatisfy(a -> {
+        assertThat(a.kind()).isEqualTo(org.plateward.alarms.AlarmKind.HISTORY_NOT_KEPT);
+        assertThat(a.state()).isEqualTo(org.plateward.alarms.AlarmState.UNACKNOWLEDGED);
+      });
+      assertThat(block).contains("ALARM NOTICE").contains("history_not_kept");
       assertThat(Files.exists(data.resolve("plateward.db"))).isFalse();
     }
   }
