@@ -1,7 +1,5 @@
 package org.plateward.alarms;
 
-import java.util.EnumSet;
-import java.util.Set;
 
 /**
  * The suppression-by-design rules, each scoped to the alarms it names and to nothing else.
@@ -11,21 +9,17 @@ import java.util.Set;
  *       {@code peak_high_high} is active and that alarm is neither shelved nor out of service:
  *       one alarm for one hot spot, at the more urgent priority. An operator who shelves or
  *       removes the high-high alarm still sees the high one.
- *   <li><b>An untrustworthy estimate raises no estimate alarms.</b> {@code peak_high},
- *       {@code peak_high_high}, {@code melt_high} and {@code exhaust_low} are suppressed while
- *       the estimator reports {@code untrustworthy} and the {@code estimator_untrustworthy}
- *       alarm is enabled, so the operator hears about the untrustworthy estimator once instead
- *       of about every number it produced. With that alarm disabled nothing is suppressed,
- *       so an untrustworthy estimate never goes unannounced.
  *   <li><b>A lost connection hides stale signals.</b> {@code signal_bad_or_stale} is suppressed
  *       while the OPC UA connection is lost and the {@code connection_lost} alarm is enabled:
  *       every signal goes stale with the connection, and the connection alarm says so once.
  * </ol>
+ *
+ * <p>An untrustworthy estimate deliberately suppresses nothing: the hot-spot alarms are judged on
+ * mean + k sigma, and hiding them exactly when the estimator doubts itself (for example when
+ * its innovations are smaller than its covariance predicts) would hide a real melt-through. The
+ * {@code estimator_untrustworthy} alarm says to read them with care.
  */
 public final class DesignSuppression {
-  private static final Set<AlarmKind> ESTIMATE_ALARMS = EnumSet.of(
-      AlarmKind.PEAK_HIGH, AlarmKind.PEAK_HIGH_HIGH, AlarmKind.MELT_HIGH, AlarmKind.EXHAUST_LOW);
-
   private DesignSuppression() {}
 
   /**
@@ -40,10 +34,8 @@ public final class DesignSuppression {
   public static boolean holds(AlarmKind kind, AlarmInputs in, AlarmSettings settings,
       boolean highHighInService) {
     boolean rule1 = kind == AlarmKind.PEAK_HIGH && highHighInService;
-    boolean rule2 = ESTIMATE_ALARMS.contains(kind) && in.untrustworthy()
-        && settings.definition(AlarmKind.ESTIMATOR_UNTRUSTWORTHY).enabled();
-    boolean rule3 = kind == AlarmKind.SIGNAL_BAD_OR_STALE && in.connectionLost()
+    boolean rule2 = kind == AlarmKind.SIGNAL_BAD_OR_STALE && in.connectionLost()
         && settings.definition(AlarmKind.CONNECTION_LOST).enabled();
-    return rule1 || rule2 || rule3;
+    return rule1 || rule2;
   }
 }

@@ -317,9 +317,13 @@ public final class LiveMonitor implements AutoCloseable {
     if (alarms == null) {
       return 0;
     }
+    // Bad for any signal; stale only for signals that report continuously: the analyzer
+    // reports every period, so between results it is expected to be silent (the estimator
+    // itself flags an analyzer silent for longer than its period plus dead time)
     Set<String> badOrStale = new TreeSet<>();
     for (org.plateward.signals.Signal s : org.plateward.signals.Signal.values()) {
-      if (aligned.frame().quality(s) == Quality.BAD || aligned.stale().contains(s)) {
+      boolean stale = aligned.stale().contains(s) && s.kind() != org.plateward.signals.Signal.Kind.ANALYZER;
+      if (aligned.frame().quality(s) == Quality.BAD || stale) {
         badOrStale.add(s.id());
       }
     }

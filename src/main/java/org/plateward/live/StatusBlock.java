@@ -65,22 +65,49 @@ public final class StatusBlock {
     return b.toString();
   }
 
-  /** One line per alarm that is not normal: priority in words, state, value against limit. */
+  /**
+   * One line per annunciated, shelved or out-of-service alarm, most urgent first: priority in
+   * words (not colour), state, the judged value against its limit in engineering units;
+   * alarms suppressed by design are counted, not listed.
+   */
   private static void alarmLines(StringBuilder b, java.util.List<AlarmStatus> alarms) {
     int shown = 0;
+    int suppressed = 0;
     for (AlarmStatus a : alarms) {
       if (a.state() == AlarmState.NORMAL) {
         continue;
       }
+      if (a.state() == AlarmState.SUPPRESSED_BY_DESIGN) {
+        suppressed++;
+        continue;
+      }
       shown++;
       b.append(String.format(Locale.ROOT, "   ALARM %-9s %-24s %-26s%s%n", a.priority().key().toUpperCase(Locale.ROOT),
-          a.kind().key(), a.state().name().toLowerCase(Locale.ROOT).replace('_', ' '),
-          Double.isFinite(a.limit()) ? String.format(Locale.ROOT, " value %s, limit %s", num(a.value()), num(a.limit())) : ""));
+          a.kind().key(), a.state().name().toLowerCase(Locale.ROOT).replace('_', ' '), judged(a)));
     }
     if (shown == 0 && !alarms.isEmpty()) {
-      b.append("   alarms      none active\n");
+      b.append("   alarms      none annunciated\n");
+    }
+    if (suppressed > 0) {
+      b.append(String.format(Locale.ROOT, "   alarms      %d suppressed by design%n", suppressed));
     }
   }
+
+  /** " value .. limit .." in degC, as a fraction or in seconds; empty for the yes/no alarms. */
+  private static String judged(AlarmStatus a) {
+    if (!Double.isFinite(a.limit())) {
+      return "";
+    }
+    return switch (a.kind()) {
+      case PEAK_HIGH, PEAK_HIGH_HIGH -> String.format(Locale.ROOT, " mean+k sigma %.1f degC, limit %.1f degC",
+          a.value() - 273.15, a.limit() - 273.15);
+      case MELT_HIGH -> String.format(Locale.ROOT, " %.2f, limit %.2f", a.value(), a.limit());
+      case EXHAUST_LOW -> String.format(Locale.ROOT, " %s, limit %.0f s",
+          a.value() > 1e12 ? "none forecast" : String.format(Locale.ROOT, "%.0f s", a.value()), a.limit());
+      default -> "";
+    };
+  }
+
 
   private static String timeToExhaust(Estimate e) {
     double t = e.timeToExhaustS();

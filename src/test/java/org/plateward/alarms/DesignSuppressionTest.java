@@ -76,20 +76,12 @@ class DesignSuppressionTest {
   }
 
   @Test
-  void anUntrustworthyEstimateSuppressesTheEstimateAlarmsOnly() {
+  void anUntrustworthyEstimateHidesNoHotSpotAlarm() {
     board.evaluate(everythingBad(0, "untrustworthy", false));
-    assertThat(inState(AlarmState.SUPPRESSED_BY_DESIGN)).containsExactlyInAnyOrder(
-        AlarmKind.PEAK_HIGH, AlarmKind.PEAK_HIGH_HIGH, AlarmKind.MELT_HIGH, AlarmKind.EXHAUST_LOW);
     assertThat(inState(AlarmState.UNACKNOWLEDGED)).containsExactlyInAnyOrder(
-        AlarmKind.ESTIMATOR_UNTRUSTWORTHY, AlarmKind.SIGNAL_BAD_OR_STALE,
-        AlarmKind.HISTORY_NOT_KEPT);
-    assertThat(board.suppressedCount()).isEqualTo(4);
-    // trust restored while the conditions still hold: they are annunciated afresh
-    board.evaluate(everythingBad(1, "degraded", false));
-    assertThat(inState(AlarmState.UNACKNOWLEDGED)).contains(AlarmKind.PEAK_HIGH_HIGH,
-        AlarmKind.MELT_HIGH, AlarmKind.EXHAUST_LOW);
-    assertThat(board.status(AlarmKind.PEAK_HIGH).state())
-        .isEqualTo(AlarmState.SUPPRESSED_BY_DESIGN); // still hidden by high-high
+        AlarmKind.PEAK_HIGH_HIGH, AlarmKind.MELT_HIGH, AlarmKind.EXHAUST_LOW,
+        AlarmKind.ESTIMATOR_UNTRUSTWORTHY, AlarmKind.SIGNAL_BAD_OR_STALE, AlarmKind.HISTORY_NOT_KEPT);
+    assertThat(inState(AlarmState.SUPPRESSED_BY_DESIGN)).containsExactly(AlarmKind.PEAK_HIGH); // by high-high only
   }
 
   @Test
@@ -99,16 +91,5 @@ class DesignSuppressionTest {
         AlarmKind.PEAK_HIGH, AlarmKind.SIGNAL_BAD_OR_STALE);
     assertThat(board.status(AlarmKind.CONNECTION_LOST).state())
         .isEqualTo(AlarmState.UNACKNOWLEDGED);
-  }
-
-  @Test
-  void withTheUntrustworthyAlarmDisabledNothingIsSuppressedForIt() {
-    var defs = plain();
-    defs.put(AlarmKind.ESTIMATOR_UNTRUSTWORTHY, new AlarmDefinition(
-        AlarmKind.ESTIMATOR_UNTRUSTWORTHY, false, Double.NaN, Priority.ROUTINE, 0,
-        java.time.Duration.ZERO, java.time.Duration.ZERO));
-    AlarmBoard b = new AlarmBoard(settings(0, defs), audit);
-    b.evaluate(everythingBad(0, "untrustworthy", false));
-    assertThat(b.status(AlarmKind.MELT_HIGH).state()).isEqualTo(AlarmState.UNACKNOWLEDGED);
   }
 }
