@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Assumptions;
  * root, so when they have no effect the Linux immutable attribute ({@code chattr +i}, which
  * binds root too) is used instead; when neither works the test is skipped with the reason.
  */
-final class WriteProtection implements AutoCloseable {
+public final class WriteProtection implements AutoCloseable {
   private final Path path;
   private final boolean immutable;
   private final String originalPerms;
@@ -24,7 +24,7 @@ final class WriteProtection implements AutoCloseable {
     this.originalPerms = originalPerms;
   }
 
-  static WriteProtection of(Path path) throws IOException, InterruptedException {
+  public static WriteProtection of(Path path) throws IOException, InterruptedException {
     String perms = PosixFilePermissions.toString(Files.getPosixFilePermissions(path));
     Files.setPosixFilePermissions(path, PosixFilePermissions.fromString(
         Files.isDirectory(path) ? "r-xr-xr-x" : "r--r--r--"));

@@ -11,6 +11,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.plateward.Advisory;
 import org.plateward.config.OpcuaSettings;
 import org.plateward.config.PlatewardConfig;
+import org.plateward.history.WriteProtection;
 import org.plateward.config.ScenarioLoader;
 import org.plateward.history.HistoryHealth;
 
@@ -27,7 +28,7 @@ class LiveFaultTest {
   void aReadOnlyDataFolderLeavesMonitoringRunningAndTheStatusBlockSaysHistoryIsNotKept() throws Exception {
     PlatewardConfig cfg = PlatewardConfig.load(Path.of("config", "plateward.toml"));
     Path data = Files.createDirectory(dir.resolve("data"));
-    try (Unwritable u = Unwritable.folder(data);
+    try (WriteProtection u = WriteProtection.of(data);
         DemoSession s = DemoSession.start(cfg, ScenarioLoader.load(Path.of("config", "scenarios", "fuel-surge.toml")),
             OpcuaSettings.load(Path.of("config", "opcua-demo.toml")), data, 20.0, "test", line -> { })) {
       long end = System.currentTimeMillis() + 20_000;
