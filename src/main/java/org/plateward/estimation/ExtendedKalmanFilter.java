@@ -198,14 +198,8 @@ public final class ExtendedKalmanFilter {
     }
   }
 
-  private void substep(double[] u, double h, double inflation) {
-    dynamics.evaluate(x, u, f, jac);
-    final long version = dynamics.jacobianVersion();
-    if (version >= 0) {
-      heldJacobianSubstep(version, h, inflation);
-      return;
-    }
-    // A = I − h J, factorised once and used for the state and both covariance solves
+  /** Forms A = I − h J in {@code lu} and factorises it in place (partial pivoting). */
+  private void factorIminusHJ(double h) {
     for (int i = 0; i < n; i++) {
       final double[] ai = lu[i];
       final double[] ji = jac[i];
@@ -217,6 +211,17 @@ public final class ExtendedKalmanFilter {
     if (!Matrices.luInPlace(lu, perm)) {
       throw new IllegalStateException("I - hJ is singular at t=" + timeS + " s, h=" + h + " s");
     }
+  }
+
+  private void substep(double[] u, double h, double inflation) {
+    dynamics.evaluate(x, u, f, jac);
+    final long version = dynamics.jacobianVersion();
+    if (version >= 0) {
+      heldJacobianSubstep(version, h, inflation);
+      return;
+    }
+    // A = I − h J, factorised once and used for the state and both covariance solves
+    factorIminusHJ(h);
     // x ← x + A⁻¹ h f
     for (int i = 0; i < n; i++) {
       vecWork2[i] = h * f[i];
@@ -251,17 +256,7 @@ public final class ExtendedKalmanFilter {
       phi = new double[n][n];
     }
     if (version != phiVersion || h != phiStepS) {
-      for (int i = 0; i < n; i++) {
-        final double[] ai = lu[i];
-        final double[] ji = jac[i];
-        for (int j = 0; j < n; j++) {
-          ai[j] = -h * ji[j];
-        }
-        ai[i] += 1.0;
-      }
-      if (!Matrices.luInPlace(lu, perm)) {
-        throw new IllegalStateException("I - hJ is singular at t=" + timeS + " s, h=" + h + " s");
-      }
+      factorIminusHJ(h);
       for (int i = 0; i < n; i++) {
         Arrays.fill(phi[i], 0.0);
         phi[i][i] = 1.0;
