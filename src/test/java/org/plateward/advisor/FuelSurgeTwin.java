@@ -46,6 +46,12 @@ final class FuelSurgeTwin {
    * {@code horizonS} with the scheduled inputs and the fuel scaled by (1 + trim), K.
    */
   double truePeakMaxK(double trim, double horizonS) {
+    return truePeakMaxK(plate, schedule, scenario, timeS, trim, horizonS);
+  }
+
+  /** The same for any truth plate of this scenario at time {@code timeS}. */
+  static double truePeakMaxK(TruthPlate plate, UpsetSchedule schedule, Scenario scenario, double timeS, double trim,
+      double horizonS) {
     PlateReactorModel model = plate.model();
     ConductionImplicitStepper stepper = new ConductionImplicitStepper(model);
     ModelEvaluation ev = model.newEvaluation();
