@@ -148,6 +148,52 @@ public final class ExhaustForecast {
     return Double.POSITIVE_INFINITY;
   }
 
+  /** Receives the plate state after each forecast step. */
+  @FunctionalInterface
+  public interface StepObserver {
+    /**
+     * @param tS time since the forecast start, s
+     * @param e plate enthalpy per cell after the step, J/m2 (do not keep or modify)
+     */
+    void after(double tS, double[] e);
+  }
+
+  /**
+   * Marches the open-loop forecast with the same steps as {@link #secondsToExhaust} over the
+   * whole horizon (no early stop), reporting every step. The Jacobian set by {@link
+   * #setJacobian} serves as J, column-rescaled as above; {@code u} may differ from the inputs it
+   * was taken at (a changed fuel flow, say), which costs accuracy only through J.
+   *
+   * @param e0 plate enthalpy per cell at the start, J/m2 (not modified)
+   * @param u inputs held
+   * @param p parameters held
+   * @param horizonS forecast horizon, s
+   * @param observer called after each step
+   * @return the plate enthalpy per cell at the horizon, J/m2
+   */
+  public double[] march(double[] e0, OperatingPoint u, ModelParameters p, double horizonS, StepObserver observer) {
+    if (jRef == null) {
+      throw new IllegalStateException("setJacobian first");
+    }
+    double[] e = e0.clone();
+    double t = 0.0;
+    ArrayRealVector rhs = new ArrayRealVector(n);
+    while (t < horizonS - 1e-9) {
+      double h = Math.min(t < FINE_SPAN_S ? FINE_STEP_S : COARSE_STEP_S, horizonS - t);
+      model.evaluate(e, u, p, ev);
+      for (int j = 0; j < n; j++) {
+        rhs.setEntry(j, h * ev.enthalpyRateWPerM2(j));
+      }
+      double[] d = solver(e, h).solve(rhs).toArray(); // (I - hJ) d = h f(e)
+      for (int j = 0; j < n; j++) {
+        e[j] += d[j];
+      }
+      t += h;
+      observer.after(t, e);
+    }
+    return e;
+  }
+
   /** Cell that melted through first in the last forecast (−1 if none). */
   public int lastCell() {
     return lastCell;
