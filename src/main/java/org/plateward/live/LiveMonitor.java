@@ -2,7 +2,12 @@ package org.plateward.live;
 
 import java.util.Set;
 import java.util.TreeSet;
+import org.plateward.advisor.FuelTrimAdvisor;
+import org.plateward.advisor.PosteriorPlate;
+import org.plateward.advisor.TrimSettings;
+import org.plateward.advisor.TrimSuggestion;
 import org.plateward.alarms.AlarmAudit;
+import org.plateward.alarms.AlarmKind;
 import org.plateward.alarms.AlarmBoard;
 import org.plateward.alarms.AlarmEvent;
 import org.plateward.alarms.AlarmInputs;
@@ -10,6 +15,7 @@ import org.plateward.alarms.AlarmSettings;
 import org.plateward.alarms.AlarmState;
 import org.plateward.alarms.AlarmStatus;
 import org.plateward.alarms.HistoryAlarmAudit;
+import org.plateward.reactor.PlateReactorModel;
 import org.plateward.signals.Quality;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -103,6 +109,9 @@ public final class LiveMonitor implements AutoCloseable {
   private final String unitName;
   private final ReactorSoftSensor sensor;
   private final AlarmBoard alarms;
+  private final FuelTrimAdvisor advisor;
+  private volatile TrimSuggestion advice;
+  private double adviceAtS = Double.NEGATIVE_INFINITY;
   private volatile List<AlarmStatus> alarmStatuses = List.of();
   private final ThreadPoolExecutor estimator;
   private final List<Consumer<String>> changeListeners = new CopyOnWriteArrayList<>();
@@ -129,6 +138,10 @@ public final class LiveMonitor implements AutoCloseable {
     this.sensor = new ReactorSoftSensor(setup.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
     this.alarms = setup.alarms() == null ? null : new AlarmBoard(setup.alarms(),
         setup.history() == null ? AlarmAudit.NONE : new HistoryAlarmAudit(setup.history()));
+    // the fuel-trim advisor keeps the forecast peak below the peak_high alarm limit
+    this.advisor = setup.alarms() == null ? null : new FuelTrimAdvisor(
+        new PlateReactorModel(setup.unit(), sensor.model().grid(), PlateReactorModel.Options.DEFAULT),
+        TrimSettings.defaults(setup.alarms().definition(AlarmKind.PEAK_HIGH).limit()));
     this.estimator =
         new ThreadPoolExecutor(1, 1, 0L, TimeUnit.MILLISECONDS, new ArrayBlockingQueue<>(BACKLOG),
             r -> {
@@ -230,7 +243,8 @@ public final class LiveMonitor implements AutoCloseable {
         h == null ? null : h.settings().databaseFile(),
         clock,
         now,
-        alarmStatuses);
+        alarmStatuses,
+        advice);
   }
 
   /** Stops the connection, then lets the estimator finish the frames it holds (up to 10 s). */
@@ -300,6 +314,7 @@ public final class LiveMonitor implements AutoCloseable {
         h.appendEstimate(row(e, sensor.cellTempK()));
       }
       int active = judgeAlarms(e, aligned, h);
+      advise(e);
       if (setup.publisher() != null) {
         setup.publisher().publish(unitName, published(e, active));
       }
@@ -311,6 +326,30 @@ public final class LiveMonitor implements AutoCloseable {
       LOGGER.error("estimate of the frame at {} failed; the next frame continues", frame.time(), ex);
     }
   }
+
+  /**
+   * Asks the fuel-trim advisor at most every {@value #ADVICE_EVERY_S} s of plant time (each
+   * question is a few open-loop forecasts); a new suggestion is told to the listeners.
+   */
+  private void advise(Estimate e) {
+    double tS = e.time().getEpochSecond() + e.time().getNano() * 1e-9;
+    if (advisor == null || !Double.isFinite(e.peakPlateTempK()) || tS - adviceAtS < ADVICE_EVERY_S) {
+      return;
+    }
+    adviceAtS = tS;
+    try {
+      PosteriorPlate post = PosteriorPlate.of(sensor);
+      advisor.consider(tS, post.enthalpyJPerM2(), sensor.heldInputs(), post.parameters(), e.peakPlateTempSdK())
+          .ifPresent(sug -> {
+            advice = sug;
+            tell("advisor " + sug.message().lines().findFirst().orElse(""));
+          });
+    } catch (RuntimeException ex) {
+      LOGGER.warn("fuel-trim advice at {} failed: {}", e.time(), ex.toString());
+    }
+  }
+
+  private static final double ADVICE_EVERY_S = 30.0;
 
   /** Judges the advisory alarms on this estimate; returns how many are active. */
   private int judgeAlarms(Estimate e, AlignedFrame aligned, HistoryRecorder h) {

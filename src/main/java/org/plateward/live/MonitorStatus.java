@@ -1,6 +1,7 @@
 package org.plateward.live;
 
 import java.util.List;
+import org.plateward.advisor.TrimSuggestion;
 import org.plateward.alarms.AlarmStatus;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -25,6 +26,7 @@ import org.plateward.softsensor.Estimate;
  * @param clock how plant time relates to the wall clock
  * @param wallNow when this look was taken
  * @param alarms the advisory alarms, most urgent first (empty when none are judged)
+ * @param advice the last fuel-trim suggestion (null when none yet)
  */
 public record MonitorStatus(
     String unitName,
@@ -40,7 +42,8 @@ public record MonitorStatus(
     Path historyFile,
     TimeScale clock,
     Instant wallNow,
-    List<AlarmStatus> alarms) {
+    List<AlarmStatus> alarms,
+    TrimSuggestion advice) {
   public MonitorStatus {
     alarms = alarms == null ? List.of() : List.copyOf(alarms);
   }

@@ -62,6 +62,11 @@ public final class StatusBlock {
     b.append(String.format(Locale.ROOT, "   frames %d, filter steps %d%s%n", s.frames(), s.blocks(),
         s.droppedFrames() > 0 ? ", " + s.droppedFrames() + " frames dropped (estimator behind)" : ""));
     alarmLines(b, s.alarms());
+    if (s.advice() != null) {
+      for (String line : s.advice().message().split("\n")) {
+        b.append("   advisor     ").append(line.strip()).append('\n');
+      }
+    }
     return b.toString();
   }
 

@@ -762,6 +762,11 @@ public final class ReactorSoftSensor {
     }
   }
 
+  /** The inputs the estimator uses now (last good value of each, SI), for what-if forecasts. */
+  public OperatingPoint heldInputs() {
+    return ReactorDynamics.operatingPoint(lastGoodInputOrBlock());
+  }
+
   private double[] lastGoodInputOrBlock() {
     return lastGoodInput.clone();
   }
