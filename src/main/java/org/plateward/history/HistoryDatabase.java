@@ -117,13 +117,8 @@ final class HistoryDatabase {
     Connection c = null;
     try {
       c = DriverManager.getConnection(url(file), cfg.toProperties());
-      int version = SchemaMigrator.versionOf(c, file);
+      int version = new SchemaMigrator(HistorySchema.MIGRATIONS).check(c, file);
       int known = HistorySchema.currentVersion();
-      if (version > known) {
-        throw new HistoryException(Problem.NEWER_SCHEMA, "history file " + file + " has schema"
-            + " version " + version + ", newer than version " + known + " that this Plateward"
-            + " understands: open it with a newer Plateward");
-      }
       if (version < known) {
         throw new HistoryException(Problem.NOT_A_HISTORY, "history file " + file + " has schema"
             + " version " + version + "; open it for writing once (plateward watch or demo) to"
