@@ -56,6 +56,8 @@ public final class ExtendedKalmanFilter {
   private final ArrayList<Epoch> history = new ArrayList<>();
   private final ArrayDeque<Epoch> spareEpochs = new ArrayDeque<>();
   private boolean replaying;
+  /** Covariance propagated like P but never updated (null when not tracked). */
+  private double[][] openLoop;
 
   private boolean pendingRepair;
   private double pendingMinEigenvalue = Double.NaN;
@@ -183,12 +185,9 @@ public final class ExtendedKalmanFilter {
         vecWork[i] = s;
       }
       System.arraycopy(vecWork, 0, x, 0, n);
-      Matrices.multiply(d.phi, p, work); // Φ P
-      Matrices.multiplyTransposed(work, d.phi, p); // (Φ P) Φᵀ
-      for (int i = 0; i < n; i++) {
-        for (int j = 0; j < n; j++) {
-          p[i][j] += d.qd[i][j];
-        }
+      discreteCovariance(d, p);
+      if (tracksOpenLoop()) {
+        discreteCovariance(d, openLoop);
       }
     }
     Matrices.symmetrise(p);
@@ -196,6 +195,21 @@ public final class ExtendedKalmanFilter {
     if (!guard.isPositiveDefinite(p, false)) {
       repairCovariance("propagation");
     }
+  }
+
+  /** c ← Φ c Φᵀ + Q_d. */
+  private void discreteCovariance(DiscreteStep d, double[][] c) {
+    Matrices.multiply(d.phi, c, work); // Φ C
+    Matrices.multiplyTransposed(work, d.phi, c); // (Φ C) Φᵀ
+    for (int i = 0; i < n; i++) {
+      for (int j = 0; j < n; j++) {
+        c[i][j] += d.qd[i][j];
+      }
+    }
+  }
+
+  private boolean tracksOpenLoop() {
+    return openLoop != null && !replaying;
   }
 
   /** Forms A = I − h J in {@code lu} and factorises it in place (partial pivoting). */
@@ -230,19 +244,25 @@ public final class ExtendedKalmanFilter {
     for (int i = 0; i < n; i++) {
       x[i] += vecWork2[i];
     }
-    // M = P + h λ Q;  Y = A⁻¹ M;  P ← A⁻¹ Yᵀ = Φ M Φᵀ (M symmetric)
-    final double hq = h * inflation;
+    luCovariance(p, h * inflation);
+    if (tracksOpenLoop()) {
+      luCovariance(openLoop, h * inflation);
+    }
+  }
+
+  /** M = C + h λ Q;  Y = A⁻¹ M;  C ← A⁻¹ Yᵀ = Φ M Φᵀ (M symmetric), with A factorised in lu. */
+  private void luCovariance(double[][] c, double hq) {
     for (int i = 0; i < n; i++) {
       final double[] wi = work[i];
-      final double[] pi = p[i];
+      final double[] ci = c[i];
       final double[] qi = processNoiseDensity[i];
       for (int j = 0; j < n; j++) {
-        wi[j] = pi[j] + hq * qi[j];
+        wi[j] = ci[j] + hq * qi[j];
       }
     }
     Matrices.luSolve(lu, perm, work, rowsWork);
-    Matrices.transposeInto(work, p);
-    Matrices.luSolve(lu, perm, p, rowsWork);
+    Matrices.transposeInto(work, c);
+    Matrices.luSolve(lu, perm, c, rowsWork);
   }
 
   /**
@@ -289,19 +309,25 @@ public final class ExtendedKalmanFilter {
     for (int i = 0; i < n; i++) {
       x[i] += vecWork[i];
     }
-    final double hq = h * inflation;
+    heldCovariance(p, h * inflation);
+    if (tracksOpenLoop()) {
+      heldCovariance(openLoop, h * inflation);
+    }
+  }
+
+  /** C ← Φ (C + h λ Q) Φᵀ with the explicit Φ; lu is scratch here (factors needed only to rebuild Φ). */
+  private void heldCovariance(double[][] c, double hq) {
     for (int i = 0; i < n; i++) {
       final double[] li = lu[i];
-      final double[] pi = p[i];
+      final double[] ci = c[i];
       final double[] qi = processNoiseDensity[i];
       for (int j = 0; j < n; j++) {
-        li[j] = pi[j] + hq * qi[j];
+        li[j] = ci[j] + hq * qi[j];
       }
     }
-    // lu is free scratch from here (its factors are only needed when Φ is rebuilt)
     Matrices.multiply(phi, lu, work); // Y = Φ M
     Matrices.transposeInto(work, lu); // Yᵀ = M Φᵀ
-    Matrices.multiply(phi, lu, p); // Φ M Φᵀ
+    Matrices.multiply(phi, lu, c); // Φ M Φᵀ
   }
 
   // ---------------------------------------------------------------------------------------
@@ -787,6 +813,33 @@ public final class ExtendedKalmanFilter {
 
   // ---------------------------------------------------------------------------------------
   // accessors
+
+  /**
+   * Starts (or restarts) an open-loop covariance: from now on a copy of P propagated exactly as
+   * P is (same Φ, same Q, same inflation) but never updated by a measurement. Comparing it
+   * with P says how much of the uncertainty gathered since the restart the measurements
+   * removed — an observability diagnostic along the trajectory actually flown.
+   */
+  public void restartOpenLoopCovariance() {
+    openLoop = Matrices.copy(p);
+  }
+
+  /** The open-loop covariance (copy), or null when none was started. */
+  public double[][] openLoopCovariance() {
+    return openLoop == null ? null : Matrices.copy(openLoop);
+  }
+
+  /** Diagonal of the open-loop covariance (copy), or null when none was started. */
+  public double[] openLoopVariances() {
+    if (openLoop == null) {
+      return null;
+    }
+    double[] d = new double[n];
+    for (int i = 0; i < n; i++) {
+      d[i] = openLoop[i][i];
+    }
+    return d;
+  }
 
   /** Number of states n. */
   public int stateSize() {

@@ -32,6 +32,12 @@ import java.time.Instant;
  * @param biasInletK estimated bias of the plate-end thermocouple at z = 0, K
  * @param biasOutletK estimated bias of the plate-end thermocouple at z = L, K
  * @param cellMeltFraction melt fraction of each cell (copy)
+ * @param cellPlateTempK plate temperature of each cell, K (copy; empty before the start)
+ * @param cellPlateTempSdK its standard deviation per cell, K (copy)
+ * @param observability how well the present measurements pin down each key quantity: the
+ *     fraction (0..1) of the uncertainty it would have gathered open loop over the diagnostic
+ *     window that the measurements removed, by name (see {@link ObservabilityDiagnostic});
+ *     empty until the first window is complete
  */
 public record Estimate(
     Instant time,
@@ -58,10 +64,26 @@ public record Estimate(
     double heatTransferMultiplierSd,
     double biasInletK,
     double biasOutletK,
-    double[] cellMeltFraction) {
+    double[] cellMeltFraction,
+    double[] cellPlateTempK,
+    double[] cellPlateTempSdK,
+    java.util.Map<String, Double> observability) {
 
   public Estimate {
     cellMeltFraction = cellMeltFraction.clone();
+    cellPlateTempK = cellPlateTempK.clone();
+    cellPlateTempSdK = cellPlateTempSdK.clone();
+    observability = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(observability));
+  }
+
+  @Override
+  public double[] cellPlateTempK() {
+    return cellPlateTempK.clone();
+  }
+
+  @Override
+  public double[] cellPlateTempSdK() {
+    return cellPlateTempSdK.clone();
   }
 
   @Override

@@ -49,6 +49,8 @@ public final class ReactorSoftSensor {
   private static final int SLOTS = 2;
   /** The time-to-exhaust forecast runs while the peak is within this of the melting point (K). */
   static final double NEAR_MELT_K = 25.0;
+  /** Window of the observability diagnostic (s): ten minutes, the settling time of the plate. */
+  static final double OBSERVABILITY_WINDOW_S = 600.0;
 
   private final UnitSpec spec;
   private final SoftSensorSettings settings;
@@ -65,6 +67,7 @@ public final class ReactorSoftSensor {
   private final LinearMeasurement[] cloneModels = new LinearMeasurement[SLOTS];
   private final MeasurementModel analyzerModel;
   private final ExhaustForecast forecast;
+  private final ObservabilityDiagnostic observability;
 
   private ExtendedKalmanFilter ekf;
   private double t0S = Double.NaN;
@@ -145,6 +148,7 @@ public final class ReactorSoftSensor {
     }
     analyzerModel = new AnalyzerPrediction();
     forecast = new ExhaustForecast(model);
+    observability = new ObservabilityDiagnostic(layout, OBSERVABILITY_WINDOW_S);
     Arrays.fill(slotSampleS, Double.NaN);
     for (int end = 0; end < 2; end++) {
       biasMonitors[end] = new BiasRateMonitor(settings.driftWindowS(), settings.biasDriftKPerHour(), 4.0);
@@ -286,7 +290,8 @@ public final class ReactorSoftSensor {
     double nan = Double.NaN;
     return new Estimate(time, nan, nan, nan, nan, nan, nan, nan, nan, nan, nan, 0,
         EstimatorStatus.UNTRUSTWORTHY, "waiting for every input to have a usable value",
-        nan, nan, nan, nan, nan, nan, nan, nan, nan, nan, new double[0]);
+        nan, nan, nan, nan, nan, nan, nan, nan, nan, nan, new double[0], new double[0], new double[0],
+        java.util.Map.of());
   }
 
   private static double seconds(Instant t) {
@@ -478,10 +483,21 @@ public final class ReactorSoftSensor {
       status = status.worst(EstimatorStatus.DEGRADED);
       append(reason, "settling after start");
     }
+    observability.afterStep(ekf, tS, hottestCell(post));
     blockStatus = status;
     blockReason = reason.toString();
     lastEpochS = tS;
     clearBlock();
+  }
+
+  private int hottestCell(double[] x) {
+    int best = 0;
+    for (int j = 1; j < cells; j++) {
+      if (x[j] > x[best]) {
+        best = j;
+      }
+    }
+    return best;
   }
 
   private static void append(StringBuilder sb, String s) {
@@ -623,7 +639,8 @@ public final class ReactorSoftSensor {
         last.nis(), last.nisDof(), last.status(), last.reason(), last.reformingActivity(), last.reformingActivitySd(),
         last.combustionActivity(), last.combustionActivitySd(), last.heatLossWPerM2K(), last.heatLossSdWPerM2K(),
         last.heatTransferMultiplier(), last.heatTransferMultiplierSd(),
-        last.biasInletK(), last.biasOutletK(), last.cellMeltFraction());
+        last.biasInletK(), last.biasOutletK(), last.cellMeltFraction(), tK, last.cellPlateTempSdK(),
+        last.observability());
   }
 
   private Estimate derive(Instant time, EstimatorStatus status, String reason) {
@@ -636,6 +653,13 @@ public final class ReactorSoftSensor {
       melt[j] = plate.meltFraction(x[j] * capacity);
     }
     HiddenPeak pk = HiddenPeak.of(grid, tK);
+    // σ of each cell temperature: secant slope dT/dx over ±1σ times σ_x (on the plateau the
+    // temperature barely moves with enthalpy, so its σ shrinks there while the melt σ grows)
+    double[] tSd = new double[cells];
+    for (int j = 0; j < cells; j++) {
+      double sdj = Math.sqrt(Math.max(p[j][j], 1e-12));
+      tSd[j] = 0.5 * Math.abs(plate.tempK((x[j] + sdj) * capacity) - plate.tempK((x[j] - sdj) * capacity));
+    }
     // σ of the peak: gradient of the parabolic reconstruction over its three cells with respect
     // to their temperatures (central differences, 0.01 K), times the secant slope dT/dx of each
     // cell over ±1σ (statistical linearisation: on the melting plateau T barely moves with x)
@@ -704,7 +728,7 @@ public final class ReactorSoftSensor {
         Math.sqrt(Math.max(mvar, 0.0)), maxMelt, latentLeft, tte, tteSd, lastNis, lastNisDof, status, reason,
         x[ra], Math.sqrt(p[ra][ra]), x[ca], Math.sqrt(p[ca][ca]), x[hl], Math.sqrt(p[hl][hl]),
         x[layout.heatTransfer()], Math.sqrt(p[layout.heatTransfer()][layout.heatTransfer()]),
-        x[layout.bias(0)], x[layout.bias(1)], melt);
+        x[layout.bias(0)], x[layout.bias(1)], melt, tK, tSd, observability.lastWindow());
   }
 
   /**
