@@ -31,6 +31,8 @@ public final class SensorBank {
   private final double dtS;
   private final Random[] noise = new Random[Signal.COUNT];
   private final double[] lagged = new double[Signal.COUNT];
+  /** Systematic error of each meter for this run (standard normal draw, scaled in measure). */
+  private final double[] accuracyDraw = new double[Signal.COUNT];
   private final double[] alpha = new double[Signal.COUNT];
   private final List<List<ScenarioEvent>> faults = new ArrayList<>();
   private final Map<ScenarioEvent, Random> spikeStreams = new java.util.IdentityHashMap<>();
@@ -49,6 +51,10 @@ public final class SensorBank {
     this.dtS = samplePeriodS;
     for (Signal s : Signal.values()) {
       noise[s.ordinal()] = new Random(seed ^ (GOLDEN * (s.ordinal() + 1)));
+      // a stream of its own, so the noise streams are those of a plant without systematic errors
+      // (SplittableRandom mixes its seed: java.util.Random's first draws from seeds that differ
+      // in a few bits are correlated)
+      accuracyDraw[s.ordinal()] = new java.util.SplittableRandom(seed ^ (GOLDEN * (2000 + s.ordinal()))).nextGaussian();
       double tau = suite.spec(s).lagS();
       alpha[s.ordinal()] = tau > 0.0 ? 1.0 - Math.exp(-dtS / tau) : 1.0;
       faults.add(new ArrayList<>());
@@ -147,8 +153,9 @@ public final class SensorBank {
     int i = s.ordinal();
     SensorSpec spec = suite.spec(s);
     double edge = s.unit().fromSi(laggedSi);
-    double sd = spec.relativeNoise() ? spec.noiseSd() * Math.abs(edge) : spec.noiseSd();
-    edge += sd * noise[i].nextGaussian(); // drawn every frame, so the stream never shifts
+    double scale = spec.relativeNoise() ? Math.abs(edge) : 1.0;
+    edge += spec.accuracySd() * scale * accuracyDraw[i]; // the meter's systematic error
+    edge += spec.noiseSd() * scale * noise[i].nextGaussian(); // drawn every frame, so the stream never shifts
     double edgePerSi = 1.0 / (s.unit().toSi(1.0) - s.unit().toSi(0.0));
     ScenarioEvent stuck = null;
     for (ScenarioEvent ev : faults.get(i)) {

@@ -49,13 +49,13 @@ public record SensorSuite(Map<Signal, SensorSpec> sensors, double analyzerPeriod
    */
   public static SensorSuite defaults() {
     Map<Signal, SensorSpec> m = new EnumMap<>(Signal.class);
-    m.put(Signal.REF_GAS_FLOW, new SensorSpec(0.005, true, 0.0, 0.01));
-    m.put(Signal.REF_STEAM_FLOW, new SensorSpec(0.005, true, 0.0, 0.01));
-    m.put(Signal.REF_INLET_TEMP, new SensorSpec(1.0, false, 8.0, 0.1));
+    m.put(Signal.REF_GAS_FLOW, new SensorSpec(0.005, true, 0.0, 0.01, 0.005));
+    m.put(Signal.REF_STEAM_FLOW, new SensorSpec(0.005, true, 0.0, 0.01, 0.005));
+    m.put(Signal.REF_INLET_TEMP, new SensorSpec(1.0, false, 8.0, 0.1, 1.0));
     m.put(Signal.REF_PRESSURE, new SensorSpec(0.3, false, 0.0, 0.1));
-    m.put(Signal.FUEL_FLOW, new SensorSpec(0.005, true, 0.0, 0.01));
-    m.put(Signal.AIR_FLOW, new SensorSpec(0.0075, true, 0.0, 0.1));
-    m.put(Signal.COMB_INLET_TEMP, new SensorSpec(1.0, false, 8.0, 0.1));
+    m.put(Signal.FUEL_FLOW, new SensorSpec(0.005, true, 0.0, 0.01, 0.005));
+    m.put(Signal.AIR_FLOW, new SensorSpec(0.0075, true, 0.0, 0.1, 0.005));
+    m.put(Signal.COMB_INLET_TEMP, new SensorSpec(1.0, false, 8.0, 0.1, 1.0));
     m.put(Signal.COMB_PRESSURE, new SensorSpec(0.3, false, 0.0, 0.1));
     m.put(Signal.REF_OUTLET_TEMP, new SensorSpec(1.5, false, 10.0, 0.1));
     m.put(Signal.COMB_OUTLET_TEMP, new SensorSpec(1.5, false, 10.0, 0.1));

@@ -68,7 +68,11 @@ public final class Grid {
   public static Grid forUnit(Geometry g, GridSpec spec) {
     List<Double> points = new ArrayList<>();
     for (Zone z : g.combustionCoating()) {
-      addEdges(points, z, g.lengthM());
+      // the combustion gas flows from z = L towards 0: the front sits at the zone's upstream
+      // (high-z) edge, where fresh fuel first meets the catalyst
+      if (z.endM() < g.lengthM() - 1e-9) {
+        points.add(z.endM());
+      }
     }
     for (Zone z : g.reformingCoating()) {
       addEdges(points, z, g.lengthM());

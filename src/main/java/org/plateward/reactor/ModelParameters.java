@@ -7,7 +7,8 @@ package org.plateward.reactor;
  * @param reformingActivity multiplier on the Xu-Froment rate constants, dimensionless
  * @param combustionActivity multiplier on the combustion surface rate constant, dimensionless
  * @param heatLossCoefficientWPerM2K heat loss per plate plan area, W/(m2 K)
- * @param heatTransferMultiplier multiplier on the gas-wall heat-transfer coefficients
+ * @param heatTransferMultiplier multiplier on the Nusselt number, so on the gas-wall heat-transfer
+ *     coefficients and (Sh = Nu) on the mass transfer to the combustion washcoat
  */
 public record ModelParameters(
     double reformingActivity,

@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.plateward.Advisory;
 import org.plateward.softsensor.Estimate;
+import org.plateward.softsensor.ObservabilityDiagnostic;
 
 /**
  * Writes estimates as CSV, one row per frame, temperatures in degC. Header comments carry the
@@ -16,13 +17,22 @@ import org.plateward.softsensor.Estimate;
  */
 public final class EstimateWriter implements AutoCloseable {
   /** The column names, in file order. */
-  public static final List<String> COLUMNS = List.of(
+  public static final List<String> COLUMNS = columns();
+
+  private static List<String> columns() {
+    List<String> c = new java.util.ArrayList<>(List.of(
       "timestamp", "peak_plate_temp_c", "peak_plate_temp_sd_c", "peak_position_m", "buffer_melt_fraction",
       "buffer_melt_fraction_sd", "max_cell_melt_fraction", "remaining_latent_kj", "time_to_exhaust_s",
       "time_to_exhaust_sd_s", "nis", "nis_dof", "estimator_status", "reforming_activity", "reforming_activity_sd",
       "combustion_activity", "combustion_activity_sd", "heat_loss_w_m2k", "heat_loss_sd_w_m2k",
       "heat_transfer_multiplier", "heat_transfer_multiplier_sd", "plate_end_bias_ref_inlet_k",
-      "plate_end_bias_ref_outlet_k", "estimator_reason");
+      "plate_end_bias_ref_outlet_k"));
+    for (String name : ObservabilityDiagnostic.NAMES) {
+      c.add("observed_" + name);
+    }
+    c.add("estimator_reason");
+    return List.copyOf(c);
+  }
 
   private final Writer out;
   private final StringBuilder row = new StringBuilder(256);
@@ -72,6 +82,10 @@ public final class EstimateWriter implements AutoCloseable {
     cell(e.heatTransferMultiplierSd());
     cell(e.biasInletK());
     cell(e.biasOutletK());
+    for (String name : ObservabilityDiagnostic.NAMES) {
+      Double v = e.observability().get(name);
+      cell(v == null ? Double.NaN : v);
+    }
     row.append(',').append(e.reason().replace(',', ';'));
     row.append('\n');
     out.append(row);

@@ -19,9 +19,13 @@ import org.plateward.estimation.ExtendedKalmanFilter;
  * the last complete window are reported; the peak is judged at the cell that was hottest at the
  * window's end.
  */
-final class ObservabilityDiagnostic {
+public final class ObservabilityDiagnostic {
+  /** Name of the hottest cell's entry. */
+  public static final String PEAK_CELL = "peak_cell_temperature";
   /** Names of the reported quantities, in report order. */
-  static final String PEAK_CELL = "peak_cell_temperature";
+  public static final java.util.List<String> NAMES = java.util.List.of(PEAK_CELL, "reforming_activity",
+      "combustion_activity", "heat_loss", "heat_transfer_multiplier", "plate_end_bias_ref_inlet",
+      "plate_end_bias_ref_outlet");
 
   private final StateLayout layout;
   private final double windowS;
@@ -55,14 +59,12 @@ final class ObservabilityDiagnostic {
     }
     double[] open = ekf.openLoopVariances();
     double[][] p = ekf.covariance();
+    int[] index = {peakCell, layout.reformingActivity(), layout.combustionActivity(), layout.heatLoss(),
+      layout.heatTransfer(), layout.bias(0), layout.bias(1)};
     Map<String, Double> m = new LinkedHashMap<>();
-    m.put(PEAK_CELL, resolved(p, open, peakCell));
-    m.put("reforming_activity", resolved(p, open, layout.reformingActivity()));
-    m.put("combustion_activity", resolved(p, open, layout.combustionActivity()));
-    m.put("heat_loss", resolved(p, open, layout.heatLoss()));
-    m.put("heat_transfer_multiplier", resolved(p, open, layout.heatTransfer()));
-    m.put("plate_end_bias_ref_inlet", resolved(p, open, layout.bias(0)));
-    m.put("plate_end_bias_ref_outlet", resolved(p, open, layout.bias(1)));
+    for (int k = 0; k < index.length; k++) {
+      m.put(NAMES.get(k), resolved(p, open, index[k]));
+    }
     last = Collections.unmodifiableMap(m);
     ekf.restartOpenLoopCovariance();
     windowStartS = timeS;

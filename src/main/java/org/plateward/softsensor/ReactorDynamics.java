@@ -39,6 +39,8 @@ public final class ReactorDynamics implements Dynamics {
   private final double[] lagS;
   private final double refreshS;
   private final double refreshK;
+  private final double inputErrorTimeS;
+  private final double[] uEff = new double[8];
 
   private final double[] e;
   private final double[] eScratch;
@@ -67,6 +69,14 @@ public final class ReactorDynamics implements Dynamics {
    * @param refreshK largest cell-temperature change a Jacobian is held over, K
    */
   public ReactorDynamics(PlateReactorModel model, StateLayout layout, double[] lagS, double refreshS, double refreshK) {
+    this(model, layout, lagS, refreshS, refreshK, 300.0);
+  }
+
+  /**
+   * @param inputErrorTimeS correlation time of the systematic input errors, s
+   */
+  public ReactorDynamics(PlateReactorModel model, StateLayout layout, double[] lagS, double refreshS, double refreshK,
+      double inputErrorTimeS) {
     if (layout.cells() != model.cells()) {
       throw new IllegalArgumentException("layout has " + layout.cells() + " cells, model " + model.cells());
     }
@@ -78,6 +88,7 @@ public final class ReactorDynamics implements Dynamics {
     this.lagS = lagS.clone();
     this.refreshS = refreshS;
     this.refreshK = refreshK;
+    this.inputErrorTimeS = inputErrorTimeS;
     e = new double[cells];
     eScratch = new double[cells];
     base = model.newEvaluation();
@@ -127,12 +138,32 @@ public final class ReactorDynamics implements Dynamics {
     return x[j] * capacity;
   }
 
-  /** Evaluates the model at state x and inputs u into {@code out}. */
+  /**
+   * The inputs the model sees in state x: the measured u corrected by the input-error states,
+   * u_i (1 + b_i) for flows, u_i + b_i for temperatures (SI).
+   */
+  public double[] correctedInputs(double[] x, double[] u) {
+    double[] c = new double[8];
+    correctInto(x, u, c);
+    return c;
+  }
+
+  private void correctInto(double[] x, double[] u, double[] out) {
+    System.arraycopy(u, 0, out, 0, 8);
+    for (int q = 0; q < StateLayout.INPUT_ERRORS; q++) {
+      int i = StateLayout.ERROR_INPUTS[q];
+      double b = x[layout.inputError(q)];
+      out[i] = StateLayout.temperatureInput(i) ? u[i] + b : u[i] * (1.0 + b);
+    }
+  }
+
+  /** Evaluates the model at state x and inputs u (measured; corrected here) into {@code out}. */
   public void evaluateModel(double[] x, double[] u, ModelEvaluation out) {
     for (int j = 0; j < cells; j++) {
       e[j] = x[j] * capacity;
     }
-    model.evaluate(e, operatingPoint(u), parameters(x), out);
+    correctInto(x, u, uEff);
+    model.evaluate(e, operatingPoint(uEff), parameters(x), out);
   }
 
   @Override
@@ -154,6 +185,10 @@ public final class ReactorDynamics implements Dynamics {
     for (int k = 0; k < StateLayout.LAGS; k++) {
       int l = layout.lag(k);
       dxdt[l] = (ev.output(LAG_OUTPUT[k]) - x[l]) / lagS[k];
+    }
+    for (int q = 0; q < StateLayout.INPUT_ERRORS; q++) {
+      int b = layout.inputError(q);
+      dxdt[b] = -x[b] / inputErrorTimeS;
     }
   }
 
@@ -200,9 +235,10 @@ public final class ReactorDynamics implements Dynamics {
         return true;
       }
     }
+    correctInto(x, u, uEff);
     for (int i = 0; i < 8; i++) {
       boolean temp = i == 2 || i == 6;
-      double d = Math.abs(u[i] - refU[i]);
+      double d = Math.abs(uEff[i] - refU[i]);
       if (temp ? d > 5.0 : d > 0.02 * Math.abs(refU[i])) {
         return true;
       }
@@ -219,7 +255,8 @@ public final class ReactorDynamics implements Dynamics {
 
   /** Rebuilds the held Jacobian at (x, u); {@code base} must hold the model at (x, u). */
   private void rebuild(double[] x, double[] u) {
-    OperatingPoint op = operatingPoint(u);
+    double[] uc = correctedInputs(x, u);
+    OperatingPoint op = operatingPoint(uc);
     ModelParameters p = parameters(x);
     for (int j = 0; j < cells; j++) {
       e[j] = x[j] * capacity;
@@ -259,6 +296,23 @@ public final class ReactorDynamics implements Dynamics {
         heldOutputs[m][pIdx[q]] = (scratch.output(m) - base.output(m)) / step;
       }
     }
+    // input-error columns: one evaluation each with the corrected input moved
+    for (int q = 0; q < StateLayout.INPUT_ERRORS; q++) {
+      int i = StateLayout.ERROR_INPUTS[q];
+      int col = layout.inputError(q);
+      boolean temp = StateLayout.temperatureInput(i);
+      double step = temp ? 0.1 : 1e-3; // K, or relative
+      double[] up = uc.clone();
+      up[i] = temp ? uc[i] + step : uc[i] + step * u[i];
+      model.evaluate(e, operatingPoint(up), p, scratch);
+      for (int k = 0; k < cells; k++) {
+        held[k][col] = (scratch.enthalpyRateWPerM2(k) - base.enthalpyRateWPerM2(k)) / capacity / step;
+      }
+      for (int m = 0; m < ModelOutputs.COUNT; m++) {
+        heldOutputs[m][col] = (scratch.output(m) - base.output(m)) / step;
+      }
+      held[col][col] = -1.0 / inputErrorTimeS;
+    }
     // lags: dl/dt = (y(x) - l) / tau
     for (int k = 0; k < StateLayout.LAGS; k++) {
       int l = layout.lag(k);
@@ -273,7 +327,7 @@ public final class ReactorDynamics implements Dynamics {
       double phi = base.meltFraction(j);
       refInBand[j] = phi > 0.0 && phi < 1.0;
     }
-    System.arraycopy(u, 0, refU, 0, 8);
+    System.arraycopy(uc, 0, refU, 0, 8);
     refP[0] = p.reformingActivity();
     refP[1] = p.combustionActivity();
     refP[2] = p.heatLossCoefficientWPerM2K();

@@ -51,6 +51,9 @@ public final class ReactorSoftSensor {
   static final double NEAR_MELT_K = 25.0;
   /** Window of the observability diagnostic (s): ten minutes, the settling time of the plate. */
   static final double OBSERVABILITY_WINDOW_S = 600.0;
+  /** Sub-step near the melting band (s), and how near counts (K of sensible heat). */
+  static final double BAND_SUBSTEP_S = 1.0;
+  static final double BAND_MARGIN_K = 5.0;
 
   private final UnitSpec spec;
   private final SoftSensorSettings settings;
@@ -103,6 +106,7 @@ public final class ReactorSoftSensor {
 
   // derived-quantity state
   private Estimate last;
+  /** Plate temperature rate of each cell over the last propagation, K/s (for frames inside a block). */
   private double[] rate;
   private double[] prevPosterior;
   private double tteS = Double.POSITIVE_INFINITY;
@@ -111,6 +115,7 @@ public final class ReactorSoftSensor {
   private long blocks;
   private long droppedAnalyzer;
   private long heldInputBlocks;
+  private long startFailures;
   private final ModelEvaluation ev;
 
   /**
@@ -129,7 +134,7 @@ public final class ReactorSoftSensor {
     this.layout = new StateLayout(cells, SLOTS);
     this.n = layout.size();
     this.dynamics = new ReactorDynamics(model, layout, settings.lagS(), settings.jacobianRefreshS(),
-        settings.jacobianRefreshK());
+        settings.jacobianRefreshK(), settings.inputBiasTimeS());
     this.capacity = dynamics.capacityJPerM2K();
     this.ev = model.newEvaluation();
     double[][] h = new double[4][n];
@@ -241,7 +246,15 @@ public final class ReactorSoftSensor {
         clearBlock();
         return waiting(frame.time());
       }
-      start(tS);
+      try {
+        start(tS);
+      } catch (org.plateward.reactor.SteadyStateSolver.NotConvergedException ex) {
+        // in the middle of an upset the inputs may have no steady state near the hot start:
+        // wait for a frame whose inputs do
+        clearBlock();
+        startFailures++;
+        return waiting(frame.time(), "waiting for inputs with a steady state to start from (" + ex.getMessage() + ")");
+      }
       clearBlock();
       last = derive(frame.time(), EstimatorStatus.DEGRADED, "starting: steady state at the first inputs");
       return last;
@@ -287,9 +300,13 @@ public final class ReactorSoftSensor {
   }
 
   private Estimate waiting(Instant time) {
+    return waiting(time, "waiting for every input to have a usable value");
+  }
+
+  private Estimate waiting(Instant time, String why) {
     double nan = Double.NaN;
     return new Estimate(time, nan, nan, nan, nan, nan, nan, nan, nan, nan, nan, 0,
-        EstimatorStatus.UNTRUSTWORTHY, "waiting for every input to have a usable value",
+        EstimatorStatus.UNTRUSTWORTHY, why,
         nan, nan, nan, nan, nan, nan, nan, nan, nan, nan, new double[0], new double[0], new double[0],
         java.util.Map.of());
   }
@@ -336,6 +353,10 @@ public final class ReactorSoftSensor {
     for (int k = 0; k < 4; k++) {
       p0[layout.lag(k)][layout.lag(k)] = sq(5.0);
     }
+    for (int q = 0; q < StateLayout.INPUT_ERRORS; q++) {
+      int b = layout.inputError(q);
+      p0[b][b] = sq(inputErrorSd(StateLayout.ERROR_INPUTS[q]));
+    }
     for (int s = 0; s < SLOTS; s++) {
       for (int c = 0; c < 5; c++) {
         p0[layout.clone(s) + c][layout.clone(s) + c] = 1.0;
@@ -361,10 +382,8 @@ public final class ReactorSoftSensor {
     for (int a = 0; a < in.length; a++) {
       int i = in[a];
       double sd = (i == 2 || i == 6) ? settings.inputTempNoiseK() : settings.inputNoiseRelative() * Math.abs(u[i]);
-      double bias = (i == 2 || i == 6) ? settings.inputBiasTempK() : settings.inputBiasRelative() * Math.abs(u[i]);
-      // white noise sampled at 1 s: σ²·1 s; a first-order Gauss-Markov error of σ_b and
-      // correlation time τ has the low-frequency spectral density 2 σ_b² τ
-      double density = sd * sd * 1.0 + 2.0 * bias * bias * settings.inputBiasTimeS();
+      // white meter noise sampled at 1 s: σ²·1 s (the systematic part is a state of its own)
+      double density = sd * sd * 1.0;
       for (int r = 0; r < cells; r++) {
         for (int c = 0; c < cells; c++) {
           q[r][c] += b[a][r] * b[a][c] * density;
@@ -384,7 +403,17 @@ public final class ReactorSoftSensor {
     for (int end = 0; end < 2; end++) {
       q[layout.bias(end)][layout.bias(end)] = sq(settings.biasDriftKPerHour()) / 3600.0;
     }
+    // first-order Gauss-Markov input errors: db/dt = -b/τ + w keeps var σ² with density 2σ²/τ
+    for (int k = 0; k < StateLayout.INPUT_ERRORS; k++) {
+      int be = layout.inputError(k);
+      q[be][be] = 2.0 * sq(inputErrorSd(StateLayout.ERROR_INPUTS[k])) / settings.inputBiasTimeS();
+    }
     return q;
+  }
+
+  /** Stationary σ of the systematic error of input i: relative for flows, K for temperatures. */
+  private double inputErrorSd(int i) {
+    return StateLayout.temperatureInput(i) ? settings.inputBiasTempK() : settings.inputBiasRelative();
   }
 
   private static double sq(double v) {
@@ -410,15 +439,22 @@ public final class ReactorSoftSensor {
     }
     double dt = tS - lastEpochS;
     double[] before = ekf.state();
-    dynamics.stepLengthS(Math.min(dt, settings.blockS()));
+    // near the melting band T(e) has kinks that one 5 s linearly implicit step can jump across
+    // (a cell then overshoots by tens of kelvin for one block): there, 1 s sub-steps
+    int sub = nearBand(before) ? Math.max(1, (int) Math.ceil(dt / BAND_SUBSTEP_S - 1e-9)) : 1;
+    dynamics.stepLengthS(Math.min(dt, settings.blockS()) / sub);
     long buildsBefore = dynamics.builds();
-    ekf.propagate(u, dt);
+    for (int k = 0; k < sub; k++) {
+      ekf.propagate(u, dt / sub);
+    }
     double[] prior = ekf.state();
     if (dynamics.builds() != buildsBefore) {
       ekf.setProcessNoiseDensity(processNoise(prior, u, dynamics.parameters(prior)));
     }
-    for (int i = 0; i < n; i++) {
-      rate[i] = (prior[i] - before[i]) / dt;
+    // the plate-temperature rate of the propagation, K/s (not the enthalpy rate: extrapolating
+    // enthalpy across the kinks of T(e) at the band edges overshoots by tens of kelvin)
+    for (int j = 0; j < cells; j++) {
+      rate[j] = (plate.tempK(prior[j] * capacity) - plate.tempK(before[j] * capacity)) / dt;
     }
     applyPublications(tS, u);
     captureDueClones(tS, u);
@@ -474,9 +510,16 @@ public final class ReactorSoftSensor {
       append(reason, "covariance repaired (not positive definite)");
     }
     var nc = ekf.nisConsistency();
-    if (!nc.consistent()) {
+    if (!nc.consistent() && nc.meanNisPerDof() > nc.upperPerDof()) {
+      // innovations larger than the filter allows: its σ is too small to be believed
       status = EstimatorStatus.UNTRUSTWORTHY;
-      append(reason, String.format(java.util.Locale.ROOT, "NIS per dof %.2f outside its 95%% band [%.2f, %.2f] over the last %d updates",
+      append(reason, String.format(java.util.Locale.ROOT, "NIS per dof %.2f above its 95%% band [%.2f, %.2f] over the last %d updates",
+          nc.meanNisPerDof(), nc.lowerPerDof(), nc.upperPerDof(), nc.samples()));
+    } else if (!nc.consistent()) {
+      // innovations smaller than the filter expects: σ is conservative, the mean still serves
+      status = status.worst(EstimatorStatus.DEGRADED);
+      append(reason, String.format(java.util.Locale.ROOT,
+          "over-cautious: NIS per dof %.2f below its 95%% band [%.2f, %.2f] over the last %d updates (σ larger than needed)",
           nc.meanNisPerDof(), nc.lowerPerDof(), nc.upperPerDof(), nc.samples()));
     }
     if (tS - t0S < settings.startupS()) {
@@ -488,6 +531,38 @@ public final class ReactorSoftSensor {
     blockReason = reason.toString();
     lastEpochS = tS;
     clearBlock();
+  }
+
+  /** Nodes and weights of the 5-point Gauss-Hermite rule for the standard normal (exact to degree 9). */
+  private static final double[] GH_NODE = {-2.856970013872806, -1.355626179974266, 0.0, 1.355626179974266, 2.856970013872806};
+  private static final double[] GH_WEIGHT = {0.011257411327721, 0.222075922005613, 0.533333333333333, 0.222075922005613, 0.011257411327721};
+
+  /**
+   * σ of a cell's plate temperature when its enthalpy state is N(mean, sd²): the spread of
+   * T(x) by Gauss-Hermite quadrature (statistical linearisation through the kinks of T(e) at
+   * the band edges, where the derivative alone is 0 or 1 and a secant depends on the side).
+   */
+  private double temperatureSd(double mean, double sd) {
+    double m1 = 0.0;
+    double m2 = 0.0;
+    for (int q = 0; q < GH_NODE.length; q++) {
+      double t = plate.tempK((mean + sd * GH_NODE[q]) * capacity);
+      m1 += GH_WEIGHT[q] * t;
+      m2 += GH_WEIGHT[q] * t * t;
+    }
+    return Math.sqrt(Math.max(m2 - m1 * m1, 0.0));
+  }
+
+  /** Whether any cell's enthalpy lies within {@link #BAND_MARGIN_K} (of sensible heat) of the melting band. */
+  private boolean nearBand(double[] x) {
+    double lo = plate.meltStartJPerM2() / capacity - BAND_MARGIN_K;
+    double hi = plate.meltEndJPerM2() / capacity + BAND_MARGIN_K;
+    for (int j = 0; j < cells; j++) {
+      if (x[j] >= lo && x[j] <= hi) {
+        return true;
+      }
+    }
+    return false;
   }
 
   private int hottestCell(double[] x) {
@@ -630,7 +705,7 @@ public final class ReactorSoftSensor {
     double[] x = ekf.state();
     double[] tK = new double[cells];
     for (int j = 0; j < cells; j++) {
-      tK[j] = plate.tempK((x[j] + rate[j] * dt) * capacity);
+      tK[j] = plate.tempK(x[j] * capacity) + rate[j] * dt;
     }
     HiddenPeak pk = HiddenPeak.of(grid, tK);
     double tte = Double.isFinite(last.timeToExhaustS()) ? Math.max(0.0, last.timeToExhaustS() - dt) : Double.NaN;
@@ -657,8 +732,7 @@ public final class ReactorSoftSensor {
     // temperature barely moves with enthalpy, so its σ shrinks there while the melt σ grows)
     double[] tSd = new double[cells];
     for (int j = 0; j < cells; j++) {
-      double sdj = Math.sqrt(Math.max(p[j][j], 1e-12));
-      tSd[j] = 0.5 * Math.abs(plate.tempK((x[j] + sdj) * capacity) - plate.tempK((x[j] - sdj) * capacity));
+      tSd[j] = temperatureSd(x[j], Math.sqrt(Math.max(p[j][j], 1e-12)));
     }
     // σ of the peak: gradient of the parabolic reconstruction over its three cells with respect
     // to their temperatures (central differences, 0.01 K), times the secant slope dT/dx of each
@@ -677,7 +751,7 @@ public final class ReactorSoftSensor {
       tPert[j] = tK[j];
       double dPeakDt = Math.max(-1.0, Math.min(2.0, (up - dn) / (2 * d)));
       double sdj = Math.sqrt(Math.max(p[j][j], 1e-12));
-      double dTdx = (plate.tempK((x[j] + sdj) * capacity) - plate.tempK((x[j] - sdj) * capacity)) / (2 * sdj);
+      double dTdx = tSd[j] / sdj;
       g[j - lo] = dPeakDt * dTdx;
     }
     double var = 0.0;
@@ -758,7 +832,7 @@ public final class ReactorSoftSensor {
     }
     forecast.setJacobian(jc, enthalpies(x, null, 0));
     double[] u = lastGoodInputOrBlock();
-    OperatingPoint op = ReactorDynamics.operatingPoint(u);
+    OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, u));
     double mean = forecast.secondsToExhaust(enthalpies(x, null, 0), op, dynamics.parameters(x), settings.horizonS());
     int k = forecast.lastCell() >= 0 ? forecast.lastCell() : pk.cell();
     double sdK = Math.sqrt(Math.max(p[k][k], 1e-12));
@@ -772,8 +846,10 @@ public final class ReactorSoftSensor {
       xp[i] += v[i];
       xm[i] -= v[i];
     }
-    double tp = forecast.secondsToExhaust(enthalpies(xp, null, 0), op, dynamics.parameters(xp), settings.horizonS());
-    double tm = forecast.secondsToExhaust(enthalpies(xm, null, 0), op, dynamics.parameters(xm), settings.horizonS());
+    double tp = forecast.secondsToExhaust(enthalpies(xp, null, 0),
+        ReactorDynamics.operatingPoint(dynamics.correctedInputs(xp, u)), dynamics.parameters(xp), settings.horizonS());
+    double tm = forecast.secondsToExhaust(enthalpies(xm, null, 0),
+        ReactorDynamics.operatingPoint(dynamics.correctedInputs(xm, u)), dynamics.parameters(xm), settings.horizonS());
     tteS = mean;
     tteAtS = tS;
     if (!Double.isFinite(mean)) {
@@ -786,9 +862,13 @@ public final class ReactorSoftSensor {
     }
   }
 
-  /** The inputs the estimator uses now (last good value of each, SI), for what-if forecasts. */
+  /**
+   * The inputs the estimator uses now, for what-if forecasts: the last good value of each,
+   * corrected by the estimated systematic meter errors (SI).
+   */
   public OperatingPoint heldInputs() {
-    return ReactorDynamics.operatingPoint(lastGoodInputOrBlock());
+    double[] u = lastGoodInputOrBlock();
+    return ReactorDynamics.operatingPoint(ekf == null ? u : dynamics.correctedInputs(ekf.state(), u));
   }
 
   private double[] lastGoodInputOrBlock() {

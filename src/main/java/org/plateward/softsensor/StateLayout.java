@@ -13,7 +13,10 @@ package org.plateward.softsensor;
  *   N+4, N+5          bias of the plate-end thermocouples at z = 0 and z = L, K
  *   N+6 .. N+9        first-order sensor lags: reformed gas outlet, flue gas outlet, plate end
  *                     z = 0, plate end z = L, K
- *   N+10 ..            analyzer clones: {@link #cloneSlots()} slots of five dry mole fractions
+ *   N+10 .. N+15      systematic input errors (first-order Gauss-Markov): relative error of the
+ *                     reforming gas, steam, fuel and air meters, and the error of the two inlet
+ *                     thermocouples (K), in the order of {@link #ERROR_INPUTS}
+ *   N+16 ..            analyzer clones: {@link #cloneSlots()} slots of five dry mole fractions
  *                     (mol%), held from the time a sample is drawn until its result is published
  * </pre>
  */
@@ -24,6 +27,11 @@ public final class StateLayout {
   public static final int LAGS = 4;
   /** Number of augmented parameters (activities and heat loss). */
   public static final int PARAMETERS = 4;
+
+  /** Inputs (indices into the {@code OperatingPoint} order) that carry an error state. */
+  public static final int[] ERROR_INPUTS = {0, 1, 2, 4, 5, 6};
+  /** Number of input-error states. */
+  public static final int INPUT_ERRORS = ERROR_INPUTS.length;
 
   private final int cells;
   private final int slots;
@@ -71,13 +79,23 @@ public final class StateLayout {
     return cells + 6 + k;
   }
 
+  /** Error state {@code q} of input {@code ERROR_INPUTS[q]}. */
+  public int inputError(int q) {
+    return cells + 6 + LAGS + q;
+  }
+
+  /** Whether input {@code i} ({@code OperatingPoint} order) is a temperature (absolute error, K). */
+  public static boolean temperatureInput(int i) {
+    return i == 2 || i == 6;
+  }
+
   /** First state of clone slot {@code s}. */
   public int clone(int s) {
-    return cells + 6 + LAGS + s * ANALYZER_CHANNELS;
+    return cells + 6 + LAGS + INPUT_ERRORS + s * ANALYZER_CHANNELS;
   }
 
   /** Total state size n. */
   public int size() {
-    return cells + 6 + LAGS + slots * ANALYZER_CHANNELS;
+    return cells + 6 + LAGS + INPUT_ERRORS + slots * ANALYZER_CHANNELS;
   }
 }

