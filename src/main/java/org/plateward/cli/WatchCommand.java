@@ -89,7 +89,8 @@ public final class WatchCommand implements Callable<Integer> {
       out.flush();
       try {
         monitor = LiveMonitor.start(new LiveMonitor.Setup(cfg.unit(), cfg.opcua(), history, publisher,
-            SourceKind.LIVE, cfg.file().toString(), PlatewardVersion.version(), TimeScale.REAL_TIME, cfg.alarms()));
+            SourceKind.LIVE, cfg.file().toString(), PlatewardVersion.version(), TimeScale.REAL_TIME, cfg.alarms(),
+            cfg.advisor()));
       } catch (PlantConnectionException e) {
         err.println("plateward watch: " + e.getMessage());
         return PlatewardCommand.EXIT_INTERNAL;

@@ -51,7 +51,8 @@ class SchemaMigrationTest {
   @Test
   void anOlderFileIsMigratedAndKeepsItsData() throws Exception {
     Path file = dir.resolve("v1.db");
-    try (HistoryRecorder r = HistoryRecorder.start(HistoryFixtures.settings(file))) {
+    try (HistoryRecorder r = HistoryRecorder.start(HistoryFixtures.settings(file),
+        new SchemaMigrator(List.of(HistorySchema.V1)))) {
       r.appendFrame(HistoryFixtures.frame(T0));
       r.appendFrame(HistoryFixtures.frame(T0.plusSeconds(1)));
       assertThat(r.flush(Duration.ofSeconds(10))).isTrue();
