@@ -137,7 +137,4 @@ public final class AdvisorConfigReader {
     return t.has(key) ? t.quantity(key, dim, bound) : fallback;
   }
 
-  static String kelvin(double k) {
-    return String.format(Locale.ROOT, "%.2f K", k);
-  }
 }

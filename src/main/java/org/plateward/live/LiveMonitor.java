@@ -77,7 +77,7 @@ import org.slf4j.LoggerFactory;
  *
  * <p>History and publisher are optional and owned by the caller (closed after the monitor).
  */
-public final class LiveMonitor implements AutoCloseable {
+public final class LiveMonitor implements AutoCloseable, AlarmActions {
   private static final Logger LOGGER = LoggerFactory.getLogger(LiveMonitor.class);
   /** Frames that may wait for the estimator: ten minutes at 1 Hz. */
   private static final int BACKLOG = 600;
@@ -404,8 +404,8 @@ public final class LiveMonitor implements AutoCloseable {
    * @param shelveFor how long to shelve (shelve only), or null
    * @return what became of it
    */
-  public ActionResult operatorAction(ActionKind kind, String who, AlarmKind alarm, String reason,
-      Duration shelveFor) {
+  @Override
+  public ActionResult act(ActionKind kind, String who, AlarmKind alarm, String reason, Duration shelveFor) {
     if (alarms == null) {
       return new ActionResult(false, "no advisory alarms are configured", null, List.of());
     }
@@ -441,7 +441,8 @@ public final class LiveMonitor implements AutoCloseable {
   }
 
   /** The alarm states now (as of the last estimate or action). */
-  public List<AlarmStatus> alarmStatuses() {
+  @Override
+  public List<AlarmStatus> statuses() {
     return alarmStatuses;
   }
 
