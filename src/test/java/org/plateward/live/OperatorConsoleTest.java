@@ -66,11 +66,12 @@ class OperatorConsoleTest {
   @Test
   void scriptedStdinActsThroughTheBoardAndTheAuditRecordsWho() throws Exception {
     Desk desk = new Desk();
-    // the peak upper bound (1130 degC + 2 x 5 K) above peak_high (1110 degC) for longer than its
+    // the peak upper bound (1118 degC + 2 x 5 K) above peak_high (1110 degC), below peak_high_high
+    // (1135 degC, which would hide it by design), for longer than its
     // 10 s on-delay: the alarm is active and unacknowledged
     for (int s = 0; s <= 20; s++) {
       desk.now = T0.plusSeconds(s);
-      desk.board.evaluate(new AlarmInputs(desk.now, 1130 + 273.15, 5.0, 0.1, Double.POSITIVE_INFINITY, "ok",
+      desk.board.evaluate(new AlarmInputs(desk.now, 1118 + 273.15, 5.0, 0.1, Double.POSITIVE_INFINITY, "ok",
           Set.of(), false, false));
     }
     assertThat(desk.board.status(AlarmKind.PEAK_HIGH).state()).isEqualTo(AlarmState.UNACKNOWLEDGED);
@@ -97,10 +98,10 @@ class OperatorConsoleTest {
     assertThat(out).contains(">> done: peak_high: acknowledge by shift-b (seen, watching)");
     assertThat(out).contains("shelve melt_high: needs an expiry");
     assertThat(out).contains("shelve melt_high: needs a reason");
-    assertThat(out).contains("shelve melt_high: bad duration \"30 parsecs\"");
+    assertThat(out).contains("shelve melt_high: bad duration \"30\"").contains("has no unit");
     assertThat(out).contains("shelve melt_high: the duration must be positive");
     assertThat(out).contains("melt_high").contains("shelved until " + T0.plusSeconds(20).plus(Duration.ofMinutes(30)));
-    assertThat(out).contains("unknown command \"shelf\"; did you mean \"shelve\"?");
+    assertThat(out).contains("unknown command \"shelf\"").contains("(type help for the list)");
     // the audit trail holds exactly the accepted actions, with who, why and the expiry
     assertThat(desk.actions).hasSize(3);
     assertThat(desk.actions.get(0).who()).isEqualTo("shift-b");
