@@ -94,7 +94,7 @@ public final class TrimForecast {
     model.evaluate(end, u, p0, ev);
     int ch4 = Species.CH4.ordinal();
     double conversion = 1.0 - ev.reformingFlowMolPerS(n, ch4) / ev.reformingFlowMolPerS(0, ch4);
-    return new TrimOutlook(trim, peak[0], peak[0] + kSigma * peakSdK, melt[0], conversion, horizonS);
+    return new TrimOutlook(trim, peak[0], peak[0] + kSigma * peakSdK, melt[0], conversion, horizonS, peakSdK);
   }
 
   /** The inputs with the fuel flow scaled by (1 + trim), everything else unchanged. */

@@ -9,6 +9,8 @@ package org.plateward.advisor;
  * @param maxCellMeltFraction highest melt fraction any cell reaches over the horizon, 0..1
  * @param methaneConversion reforming methane conversion at the horizon, 1 − F_CH4,out / F_CH4,in
  * @param horizonS forecast horizon, s
+ * @param peakSdK the σ the upper bound was formed with, K: the present peak estimate's (plain
+ *     forecast) or the sigma points' spread of the peak over the horizon ({@link SpreadForecast})
  */
 public record TrimOutlook(
     double trim,
@@ -16,4 +18,5 @@ public record TrimOutlook(
     double peakUpperK,
     double maxCellMeltFraction,
     double methaneConversion,
-    double horizonS) {}
+    double horizonS,
+    double peakSdK) {}

@@ -7,5 +7,7 @@ public enum TrimVerdict {
   /** A fuel reduction within the bounds keeps it below the limit. */
   TRIM,
   /** Not even the largest reduction allowed keeps it below the limit. */
-  NO_TRIM_SUFFICES
+  NO_TRIM_SUFFICES,
+  /** No suggestion: the estimate it would be made from is not trustworthy (the reason says why). */
+  HELD_BACK
 }

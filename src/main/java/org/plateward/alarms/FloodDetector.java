@@ -16,7 +16,10 @@ import java.util.List;
  * minutes" and a secondary source "more than 10 alarms in a 10-minute period" [V2]; ISA-18.2
  * itself defines a flood only qualitatively [M]). The window is (t − window, t]. The flood ends
  * when the count falls back to the threshold or below, at the moment the annunciation that
- * made the difference leaves the window (our choice; the sources give no end criterion).
+ * made the difference leaves the window (our choice; the sources give no end criterion). For
+ * scale, the long-term rate judged very likely acceptable is about 1 per 10 minutes (EEMUA 191,
+ * 3rd ed. 2013 [V2]; the ISA-18.2 performance-metrics table gives ~1 per 10 min, ~6 per hour,
+ * ~150 per day [M]); the flood figure is ten times that.
  */
 public final class FloodDetector {
   private final int threshold;

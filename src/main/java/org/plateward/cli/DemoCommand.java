@@ -10,6 +10,7 @@ import org.plateward.config.OpcuaSettings;
 import org.plateward.config.PlatewardConfig;
 import org.plateward.config.ScenarioLoader;
 import org.plateward.live.ConsoleView;
+import org.plateward.live.OperatorConsole;
 import org.plateward.live.DemoSession;
 import org.plateward.opcua.PlantConnectionException;
 import org.plateward.plant.Scenario;
@@ -61,6 +62,10 @@ public final class DemoCommand implements Callable<Integer> {
       description = "The [opcua] tag map of the simulated plant (default: opcua-demo.toml beside the configuration).")
   Path tagMap;
 
+  @Option(names = "--operator", paramLabel = "NAME",
+      description = "Name stored with each alarm action typed on the console (default: the OS user).")
+  String operator;
+
   @Option(names = "--refresh", paramLabel = "S", defaultValue = "5",
       description = "Wall-clock seconds between status blocks (default ${DEFAULT-VALUE}).")
   double refreshS;
@@ -108,6 +113,7 @@ public final class DemoCommand implements Callable<Integer> {
     }
     LiveRun run = new LiveRun();
     ConsoleView view = ConsoleView.start(session.monitor(), out, refreshS);
+    WatchCommand.startOperatorConsole(session.monitor(), out, operator);
     try {
       String why = run.await(durationS, () -> session.plant().ended());
       out.println("plateward demo: stopping (" + why + ")");

@@ -7,6 +7,7 @@ import org.plateward.config.PlatewardConfig;
 import org.plateward.history.HistoryRecorder;
 import org.plateward.history.SourceKind;
 import org.plateward.live.ConsoleView;
+import org.plateward.live.OperatorConsole;
 import org.plateward.live.LiveMonitor;
 import org.plateward.live.TimeScale;
 import org.plateward.opcua.EndpointPortInUseException;
@@ -42,6 +43,10 @@ public final class WatchCommand implements Callable<Integer> {
   @Option(names = "--publish-port", paramLabel = "P", defaultValue = "" + EstimatePublisher.DEFAULT_PORT,
       description = "Port of the soft-sensor publisher on 127.0.0.1 (0 = any free port; default ${DEFAULT-VALUE}).")
   int publishPort;
+
+  @Option(names = "--operator", paramLabel = "NAME",
+      description = "Name stored with each alarm action typed on the console (default: the OS user).")
+  String operator;
 
   @Option(names = "--refresh", paramLabel = "S", defaultValue = "5",
       description = "Seconds between status blocks (default ${DEFAULT-VALUE}).")
@@ -89,12 +94,14 @@ public final class WatchCommand implements Callable<Integer> {
       out.flush();
       try {
         monitor = LiveMonitor.start(new LiveMonitor.Setup(cfg.unit(), cfg.opcua(), history, publisher,
-            SourceKind.LIVE, cfg.file().toString(), PlatewardVersion.version(), TimeScale.REAL_TIME, cfg.alarms()));
+            SourceKind.LIVE, cfg.file().toString(), PlatewardVersion.version(), TimeScale.REAL_TIME, cfg.alarms(),
+            cfg.advisor()));
       } catch (PlantConnectionException e) {
         err.println("plateward watch: " + e.getMessage());
         return PlatewardCommand.EXIT_INTERNAL;
       }
       view = ConsoleView.start(monitor, out, refreshS);
+      startOperatorConsole(monitor, out, operator);
       String why = run.await(durationS, () -> false);
       out.println("plateward watch: stopping (" + why + ")");
       out.flush();
@@ -115,5 +122,20 @@ public final class WatchCommand implements Callable<Integer> {
       out.flush();
       run.done(err);
     }
+  }
+
+  /**
+   * Reads operator commands (ack, shelve, unshelve, alarms, help) from stdin on a daemon thread
+   * when the monitor judges alarms.
+   */
+  static void startOperatorConsole(org.plateward.live.LiveMonitor monitor, java.io.PrintWriter out, String operator) {
+    if (!monitor.hasAlarms()) {
+      return;
+    }
+    String who = OperatorConsole.operatorName(operator);
+    new OperatorConsole(monitor, who, out).start(
+        new java.io.InputStreamReader(System.in, java.nio.charset.StandardCharsets.UTF_8));
+    out.println("operator console: type help for alarm commands (actions stored as \"" + who + "\")");
+    out.flush();
   }
 }

@@ -1,5 +1,7 @@
 package org.plateward.config;
 
+import org.plateward.advisor.TrimSettings;
+import org.plateward.alarms.AlarmKind;
 import org.plateward.alarms.AlarmSettings;
 
 import java.nio.file.Path;
@@ -23,9 +25,13 @@ import org.plateward.reactor.UnitSpec;
  *     [opcua]} section); null when the file has none
  * @param alarms the advisory alarm definitions (the optional {@code [alarms]} section); null
  *     when the file has none
+ * @param advisor the fuel-trim advisor settings (the optional {@code [advisor]} section; its
+ *     defaults, with the peak_high limit, when the file has none); null when the file has
+ *     neither {@code [advisor]} nor {@code [alarms]}
  */
 public record PlatewardConfig(
-    Path file, UnitSpec unit, HistorySettings history, OpcuaSettings opcua, AlarmSettings alarms) {
+    Path file, UnitSpec unit, HistorySettings history, OpcuaSettings opcua, AlarmSettings alarms,
+    TrimSettings advisor) {
   /** The file every command reads unless told otherwise. */
   public static final Path DEFAULT_FILE = Path.of("config", "plateward.toml");
 
@@ -44,7 +50,13 @@ public record PlatewardConfig(
     HistorySettings history = HistoryConfigReader.read(doc, errors);
     OpcuaSettings opcua = OpcuaSettings.read(doc, errors);
     AlarmSettings alarms = AlarmConfigReader.read(doc, errors);
+    double peakHighK = alarms == null || alarms.definitions().get(AlarmKind.PEAK_HIGH) == null ? Double.NaN
+        : alarms.definition(AlarmKind.PEAK_HIGH).limit();
+    TrimSettings advisor = AdvisorConfigReader.read(doc, errors, peakHighK);
     errors.throwIfAny();
-    return new PlatewardConfig(file, unit, history, opcua, alarms);
+    if (advisor == null && !Double.isNaN(peakHighK)) {
+      advisor = TrimSettings.defaults(peakHighK);
+    }
+    return new PlatewardConfig(file, unit, history, opcua, alarms, advisor);
   }
 }

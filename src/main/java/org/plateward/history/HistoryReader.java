@@ -200,6 +200,27 @@ public final class HistoryReader implements AutoCloseable {
     return out;
   }
 
+  /** The fuel-trim suggestions in [from, to), in the order they were stored. */
+  public List<SuggestionRow> suggestions(Instant from, Instant to) throws HistoryException {
+    List<SuggestionRow> out = new ArrayList<>();
+    try (PreparedStatement p = conn.prepareStatement("SELECT time_ms, verdict, trim_percent, limit_k,"
+        + " hold_peak_upper_k, trim_peak_upper_k, hold_max_melt_fraction, trim_max_melt_fraction,"
+        + " hold_conversion, trim_conversion, horizon_s, message, label FROM advisor_suggestions"
+        + " WHERE time_ms >= ? AND time_ms < ? ORDER BY time_ms, id")) {
+      range(p, from, to);
+      try (ResultSet r = p.executeQuery()) {
+        while (r.next()) {
+          out.add(new SuggestionRow(Instant.ofEpochMilli(r.getLong(1)), r.getString(2), r.getDouble(3),
+              real(r, 4), real(r, 5), real(r, 6), real(r, 7), real(r, 8), real(r, 9), real(r, 10), real(r, 11),
+              r.getString(12), r.getString(13)));
+        }
+      }
+    } catch (SQLException e) {
+      throw SqliteFaults.of(file, "reading advisor suggestions", e);
+    }
+    return out;
+  }
+
   /** The gaps that overlap [from, to), by start. */
   public List<GapRow> gaps(Instant from, Instant to) throws HistoryException {
     List<GapRow> out = new ArrayList<>();

@@ -138,6 +138,11 @@ public final class HistoryRecorder implements AutoCloseable {
     return offer(audit, action);
   }
 
+  /** Queues a fuel-trim suggestion; committed at once with full durability, like the audit trail. */
+  public boolean appendSuggestion(SuggestionRow suggestion) {
+    return offer(audit, suggestion);
+  }
+
   /** Queues the record of a run. */
   public boolean appendRun(RunRow run) {
     return offer(audit, run);
@@ -340,7 +345,8 @@ public final class HistoryRecorder implements AutoCloseable {
     }
     boolean hasAudit = false;
     for (Object e : batch) {
-      if (e instanceof AlarmEventRow || e instanceof OperatorActionRow || e instanceof RunRow) {
+      if (e instanceof AlarmEventRow || e instanceof OperatorActionRow || e instanceof RunRow
+          || e instanceof SuggestionRow) {
         hasAudit = true;
         break;
       }
@@ -526,6 +532,8 @@ public final class HistoryRecorder implements AutoCloseable {
       return r.started().toEpochMilli();
     } else if (e instanceof GapRow g) {
       return g.end().toEpochMilli();
+    } else if (e instanceof SuggestionRow g) {
+      return g.time().toEpochMilli();
     }
     return System.currentTimeMillis();
   }

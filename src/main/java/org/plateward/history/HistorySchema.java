@@ -37,6 +37,15 @@ import java.util.List;
  *       rescan old rows.
  *   <li>{@code schema_version(version, applied_ms, description)}: one row per applied step.
  * </ul>
+ *
+ * <h2>Version 2</h2>
+ *
+ * <ul>
+ *   <li>{@code advisor_suggestions(id, time_ms, verdict, trim_percent, limit_k,
+ *       hold_peak_upper_k, trim_peak_upper_k, hold_max_melt_fraction, trim_max_melt_fraction,
+ *       hold_conversion, trim_conversion, horizon_s, message, label)}: every fuel-trim
+ *       suggestion, append-only with a time index, never pruned (like the audit trail).
+ * </ul>
  */
 public final class HistorySchema {
   private HistorySchema() {}
@@ -80,8 +89,16 @@ public final class HistorySchema {
       "CREATE INDEX gaps_by_start ON gaps (start_ms)",
       "CREATE TABLE prune_marks (what TEXT PRIMARY KEY, through_ms INTEGER NOT NULL)"));
 
+  static final Migration V2 = new Migration(2, "advisor suggestions", List.of(
+      "CREATE TABLE advisor_suggestions (id INTEGER PRIMARY KEY, time_ms INTEGER NOT NULL,"
+          + " verdict TEXT NOT NULL, trim_percent REAL NOT NULL, limit_k REAL,"
+          + " hold_peak_upper_k REAL, trim_peak_upper_k REAL, hold_max_melt_fraction REAL,"
+          + " trim_max_melt_fraction REAL, hold_conversion REAL, trim_conversion REAL,"
+          + " horizon_s REAL, message TEXT NOT NULL, label TEXT NOT NULL)",
+      "CREATE INDEX advisor_suggestions_by_time ON advisor_suggestions (time_ms)"));
+
   /** The schema this Plateward writes, oldest step first. */
-  public static final List<Migration> MIGRATIONS = List.of(V1);
+  public static final List<Migration> MIGRATIONS = List.of(V1, V2);
 
   /** The version a file has after all {@link #MIGRATIONS}. */
   public static int currentVersion() {

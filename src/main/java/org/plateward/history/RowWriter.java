@@ -24,8 +24,11 @@ final class RowWriter implements AutoCloseable {
   private final PreparedStatement action;
   private final PreparedStatement run;
   private final PreparedStatement gap;
+  private final Connection conn;
+  private PreparedStatement suggestion; // prepared at first use: a version-1 file has no table for it
 
   RowWriter(Connection c) throws SQLException {
+    conn = c;
     registerSignals(c, signalKey);
     sample = c.prepareStatement(
         "INSERT OR REPLACE INTO samples (time_ms, signal, value, quality) VALUES (?, ?, ?, ?)");
@@ -114,6 +117,10 @@ final class RowWriter implements AutoCloseable {
         run.setString(6, r.modelVersion());
         run.executeUpdate();
         rows++;
+      } else if (e instanceof SuggestionRow g) {
+        bindSuggestion(g);
+        suggestion.executeUpdate();
+        rows++;
       } else if (e instanceof GapRow g) {
         gap.setLong(1, g.start().toEpochMilli());
         gap.setLong(2, g.end().toEpochMilli());
@@ -166,6 +173,28 @@ final class RowWriter implements AutoCloseable {
     estimate.setBytes(15, ProfileCodec.encodeProfile(r.cellMeltFractionShared()));
   }
 
+  private void bindSuggestion(SuggestionRow g) throws SQLException {
+    if (suggestion == null) {
+      suggestion = conn.prepareStatement("INSERT INTO advisor_suggestions (time_ms, verdict, trim_percent,"
+          + " limit_k, hold_peak_upper_k, trim_peak_upper_k, hold_max_melt_fraction, trim_max_melt_fraction,"
+          + " hold_conversion, trim_conversion, horizon_s, message, label)"
+          + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+    }
+    suggestion.setLong(1, g.time().toEpochMilli());
+    suggestion.setString(2, g.verdict());
+    suggestion.setDouble(3, Double.isFinite(g.trimPercent()) ? g.trimPercent() : 0.0);
+    setReal(suggestion, 4, g.limitK());
+    setReal(suggestion, 5, g.holdPeakUpperK());
+    setReal(suggestion, 6, g.trimPeakUpperK());
+    setReal(suggestion, 7, g.holdMaxMeltFraction());
+    setReal(suggestion, 8, g.trimMaxMeltFraction());
+    setReal(suggestion, 9, g.holdConversion());
+    setReal(suggestion, 10, g.trimConversion());
+    setReal(suggestion, 11, g.horizonS());
+    suggestion.setString(12, g.text());
+    suggestion.setString(13, g.label());
+  }
+
   static int qualityCode(Quality q) {
     return switch (q) {
       case GOOD -> HistorySchema.QUALITY_GOOD;
@@ -210,9 +239,11 @@ final class RowWriter implements AutoCloseable {
 
   @Override
   public void close() {
-    for (PreparedStatement p : new PreparedStatement[] {sample, estimate, alarm, action, run, gap}) {
+    for (PreparedStatement p : new PreparedStatement[] {sample, estimate, alarm, action, run, gap, suggestion}) {
       try {
-        p.close();
+        if (p != null) {
+          p.close();
+        }
       } catch (SQLException ignored) {
         // closing on shutdown
       }

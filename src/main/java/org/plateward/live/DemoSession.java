@@ -85,7 +85,7 @@ public final class DemoSession implements AutoCloseable {
       LiveMonitor monitor = LiveMonitor.start(new LiveMonitor.Setup(cfg.unit(),
           scaled(demoMap, plant.endpointUrl(), speed), history, publisher, SourceKind.DEMO,
           cfg.file() == null ? null : cfg.file().toString(), version,
-          new TimeScale(origin(Instant.now(), wallPeriodS), scenario.start(), speed), cfg.alarms()));
+          new TimeScale(origin(Instant.now(), wallPeriodS), scenario.start(), speed), cfg.alarms(), cfg.advisor()));
       // plant time starts now that the monitor listens: frame 0 is served at the origin
       TimeScale clock = new TimeScale(origin(Instant.now().plusMillis(300), wallPeriodS), scenario.start(), speed);
       monitor.pinClock(clock);

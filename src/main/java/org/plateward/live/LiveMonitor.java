@@ -1,9 +1,18 @@
 package org.plateward.live;
 
+import java.util.Optional;
 import java.util.Set;
 import java.util.TreeSet;
 import org.plateward.advisor.FuelTrimAdvisor;
-import org.plateward.advisor.PosteriorPlate;
+import org.plateward.advisor.PosteriorBelief;
+import org.plateward.advisor.TrimVerdict;
+import org.plateward.alarms.ActionKind;
+import org.plateward.alarms.ActionResult;
+import org.plateward.history.SuggestionRow;
+import java.time.Duration;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeoutException;
 import org.plateward.advisor.TrimSettings;
 import org.plateward.advisor.TrimSuggestion;
 import org.plateward.alarms.AlarmAudit;
@@ -68,7 +77,7 @@ import org.slf4j.LoggerFactory;
  *
  * <p>History and publisher are optional and owned by the caller (closed after the monitor).
  */
-public final class LiveMonitor implements AutoCloseable {
+public final class LiveMonitor implements AutoCloseable, AlarmActions {
   private static final Logger LOGGER = LoggerFactory.getLogger(LiveMonitor.class);
   /** Frames that may wait for the estimator: ten minutes at 1 Hz. */
   private static final int BACKLOG = 600;
@@ -85,6 +94,8 @@ public final class LiveMonitor implements AutoCloseable {
    * @param modelVersion program version, for the run row (may be null)
    * @param clock wall clock to plant time
    * @param alarms advisory alarm definitions (null: no alarms are judged)
+   * @param advisor fuel-trim advisor settings (null: the defaults with the peak_high limit;
+   *     no advisor without alarms either)
    */
   public record Setup(
       UnitSpec unit,
@@ -95,7 +106,8 @@ public final class LiveMonitor implements AutoCloseable {
       String configFile,
       String modelVersion,
       TimeScale clock,
-      AlarmSettings alarms) {
+      AlarmSettings alarms,
+      TrimSettings advisor) {
     public Setup {
       Objects.requireNonNull(unit, "unit");
       Objects.requireNonNull(opcua, "opcua");
@@ -138,10 +150,12 @@ public final class LiveMonitor implements AutoCloseable {
     this.sensor = new ReactorSoftSensor(setup.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
     this.alarms = setup.alarms() == null ? null : new AlarmBoard(setup.alarms(),
         setup.history() == null ? AlarmAudit.NONE : new HistoryAlarmAudit(setup.history()));
-    // the fuel-trim advisor keeps the forecast peak below the peak_high alarm limit
-    this.advisor = setup.alarms() == null ? null : new FuelTrimAdvisor(
-        new PlateReactorModel(setup.unit(), sensor.model().grid(), PlateReactorModel.Options.DEFAULT),
-        TrimSettings.defaults(setup.alarms().definition(AlarmKind.PEAK_HIGH).limit()));
+    // the fuel-trim advisor keeps the forecast peak below its limit ([advisor] peak_limit,
+    // by default the peak_high alarm limit)
+    TrimSettings ts = setup.advisor() != null ? setup.advisor() : setup.alarms() == null ? null
+        : TrimSettings.defaults(setup.alarms().definition(AlarmKind.PEAK_HIGH).limit());
+    this.advisor = ts == null ? null : new FuelTrimAdvisor(
+        new PlateReactorModel(setup.unit(), sensor.model().grid(), PlateReactorModel.Options.DEFAULT), ts);
     this.estimator =
         new ThreadPoolExecutor(1, 1, 0L, TimeUnit.MILLISECONDS, new ArrayBlockingQueue<>(BACKLOG),
             r -> {
@@ -328,28 +342,109 @@ public final class LiveMonitor implements AutoCloseable {
   }
 
   /**
-   * Asks the fuel-trim advisor at most every {@value #ADVICE_EVERY_S} s of plant time (each
-   * question is a few open-loop forecasts); a new suggestion is told to the listeners.
+   * Asks the fuel-trim advisor at most every {@code forecast_every} of plant time (each question
+   * is a few sigma-point forecasts from the whole posterior); while the estimate is
+   * untrustworthy the advisor holds back and says why. A new suggestion is told to the
+   * listeners and stored in history.
    */
   private void advise(Estimate e) {
     double tS = e.time().getEpochSecond() + e.time().getNano() * 1e-9;
-    if (advisor == null || !Double.isFinite(e.peakPlateTempK()) || tS - adviceAtS < ADVICE_EVERY_S) {
+    if (advisor == null || tS - adviceAtS < advisor.settings().forecastEveryS()) {
       return;
     }
     adviceAtS = tS;
     try {
-      PosteriorPlate post = PosteriorPlate.of(sensor);
-      advisor.consider(tS, post.enthalpyJPerM2(), sensor.heldInputs(), post.parameters(), e.peakPlateTempSdK())
-          .ifPresent(sug -> {
-            advice = sug;
-            tell("advisor " + sug.message().lines().findFirst().orElse(""));
-          });
+      Optional<TrimSuggestion> s;
+      if (e.status() == EstimatorStatus.UNTRUSTWORTHY || !Double.isFinite(e.peakPlateTempK())) {
+        s = advisor.holdBack(tS, e.reason() == null || e.reason().isBlank() ? e.status().text() : e.reason());
+      } else {
+        s = advisor.consider(tS, PosteriorBelief.of(sensor), sensor.heldInputs());
+      }
+      s.ifPresent(sug -> {
+        advice = sug;
+        tell("advisor " + sug.message().lines().findFirst().orElse(""));
+        HistoryRecorder h = setup.history();
+        if (h != null) {
+          h.appendSuggestion(suggestionRow(sug, e.time()));
+        }
+      });
     } catch (RuntimeException ex) {
       LOGGER.warn("fuel-trim advice at {} failed: {}", e.time(), ex.toString());
     }
   }
 
-  private static final double ADVICE_EVERY_S = 30.0;
+  /** What history keeps of a suggestion made at {@code time}. */
+  static SuggestionRow suggestionRow(TrimSuggestion s, Instant time) {
+    boolean held = s.verdict() == TrimVerdict.HELD_BACK;
+    double nan = Double.NaN;
+    return new SuggestionRow(time, s.verdict().name().toLowerCase(java.util.Locale.ROOT), 100 * s.trim(),
+        s.limitK(),
+        held ? nan : s.hold().peakUpperK(), held ? nan : s.trimmed().peakUpperK(),
+        held ? nan : s.hold().maxCellMeltFraction(), held ? nan : s.trimmed().maxCellMeltFraction(),
+        held ? nan : s.hold().methaneConversion(), held ? nan : s.trimmed().methaneConversion(),
+        held ? nan : s.hold().horizonS(), s.message(), "ADVISORY");
+  }
+
+  // --- operator actions (any thread; carried out on the estimator thread) ---------------------
+
+  /** Whether advisory alarms are judged (there is a board to act on). */
+  public boolean hasAlarms() {
+    return alarms != null;
+  }
+
+  /**
+   * Carries out an operator action on the alarm board, on the estimator thread (the board has
+   * one owner), at the present plant time (never before the last estimate). Accepted actions go
+   * to the audit trail with {@code who}.
+   *
+   * @param kind acknowledge, shelve, unshelve, ...
+   * @param who the operator
+   * @param alarm the alarm
+   * @param reason the reason (required for shelve), or null
+   * @param shelveFor how long to shelve (shelve only), or null
+   * @return what became of it
+   */
+  @Override
+  public ActionResult act(ActionKind kind, String who, AlarmKind alarm, String reason, Duration shelveFor) {
+    if (alarms == null) {
+      return new ActionResult(false, "no advisory alarms are configured", null, List.of());
+    }
+    Future<ActionResult> f;
+    try {
+      f = estimator.submit(() -> {
+        Instant now = clock.toPlant(Instant.now());
+        Estimate last = latest;
+        if (last != null && last.time().isAfter(now)) {
+          now = last.time();
+        }
+        ActionResult r = switch (kind) {
+          case ACKNOWLEDGE -> alarms.acknowledge(now, who, alarm, reason);
+          case SHELVE -> alarms.shelve(now, who, alarm, reason, shelveFor == null ? null : now.plus(shelveFor));
+          case UNSHELVE -> alarms.unshelve(now, who, alarm, reason);
+          case REMOVE_FROM_SERVICE -> alarms.removeFromService(now, who, alarm, reason);
+          case RETURN_TO_SERVICE -> alarms.returnToService(now, who, alarm, reason);
+        };
+        alarmStatuses = alarms.statuses();
+        return r;
+      });
+    } catch (java.util.concurrent.RejectedExecutionException ex) {
+      return new ActionResult(false, "the monitor is stopping or busy; try again", null, List.of());
+    }
+    try {
+      return f.get(10, TimeUnit.SECONDS);
+    } catch (InterruptedException ex) {
+      Thread.currentThread().interrupt();
+      return new ActionResult(false, "interrupted", null, List.of());
+    } catch (ExecutionException | TimeoutException ex) {
+      return new ActionResult(false, "the action could not be carried out: " + ex, null, List.of());
+    }
+  }
+
+  /** The alarm states now (as of the last estimate or action). */
+  @Override
+  public List<AlarmStatus> statuses() {
+    return alarmStatuses;
+  }
 
   /** Judges the advisory alarms on this estimate; returns how many are active. */
   private int judgeAlarms(Estimate e, AlignedFrame aligned, HistoryRecorder h) {

@@ -52,6 +52,25 @@ class EstimateDrivenTrimTest {
     assertThat(s.trim()).isBetween(set.minTrim(), 0.0);
     assertThat(hold).isGreaterThan(PEAK_HIGH_K);
     assertThat(trimmed).isLessThan(PEAK_HIGH_K);
+
+    // the same question with the sigma-point spread of the whole posterior (SpreadForecast):
+    // the upper bound is mean + 2 sigma of the forecast peak over the points; the trim it
+    // suggests must also keep the plant's true peak below the limit, within the bounds
+    FuelTrimAdvisor spreadAdvisor = new FuelTrimAdvisor(sensor.model(), set);
+    java.lang.management.ThreadMXBean cpu = java.lang.management.ManagementFactory.getThreadMXBean();
+    long c0 = cpu.getCurrentThreadCpuTime();
+    TrimSuggestion ss = spreadAdvisor.evaluate(t, PosteriorBelief.of(sensor), u);
+    double costMs = (cpu.getCurrentThreadCpuTime() - c0) / 1e6;
+    double trimmedSpread = FuelSurgeTwin.truePeakMaxK(plant.plate(), plant.schedule(), fx.scenario, t, ss.trim(),
+        set.horizonS());
+    System.out.printf("sigma-point advisor: %s trim %.2f %%, hold peak %.1f K +- %.1f K, trimmed upper %.1f K,"
+        + " true peak max trimmed %.1f K; %d sigma points, %.0f ms thread CPU%n%s%n", ss.verdict(), 100 * ss.trim(),
+        ss.hold().peakTempK(), ss.hold().peakSdK(), ss.trimmed().peakUpperK(), trimmedSpread,
+        spreadAdvisor.lastSigmaPoints().size(), costMs, ss.message());
+    assertThat(ss.verdict()).isEqualTo(TrimVerdict.TRIM);
+    assertThat(ss.trim()).isBetween(set.minTrim(), 0.0);
+    assertThat(ss.trimmed().peakUpperK()).isLessThanOrEqualTo(PEAK_HIGH_K + 1e-9);
+    assertThat(trimmedSpread).isLessThan(PEAK_HIGH_K);
   }
 
   private static double[] measuredInputs(PlantSample s) {

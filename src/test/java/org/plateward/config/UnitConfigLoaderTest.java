@@ -131,7 +131,7 @@ class UnitConfigLoaderTest {
   void tablesOwnedByLaterSectionsAreLeftAlone(@TempDir Path dir) throws Exception {
     Path file = dir.resolve("with-extra.toml");
     Files.writeString(file, Files.readString(ConfigFixtures.DEMO)
-        + "\n[advisor]\nnote = \"read by a later version\"\n[history]\npath = \"x.db\"\n");
+        + "\n[display]\nnote = \"read by a later version\"\n[history]\npath = \"x.db\"\n");
     assertThat(PlatewardConfig.load(file).unit().name()).isEqualTo("TM-PR1");
   }
 

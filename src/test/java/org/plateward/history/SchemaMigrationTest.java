@@ -41,9 +41,9 @@ class SchemaMigrationTest {
       }
     }
     assertThat(tables).contains("schema_version", "signals", "samples", "sample_summaries",
-        "estimates", "alarm_events", "operator_actions", "runs", "gaps");
+        "estimates", "alarm_events", "operator_actions", "runs", "gaps", "advisor_suggestions");
     assertThat(HistoryFixtures.count(file, "SELECT max(version) FROM schema_version"))
-        .isEqualTo(1);
+        .isEqualTo(HistorySchema.currentVersion());
     assertThat(HistoryFixtures.count(file, "SELECT count(*) FROM signals"))
         .isEqualTo(org.plateward.signals.Signal.COUNT);
   }
@@ -51,7 +51,8 @@ class SchemaMigrationTest {
   @Test
   void anOlderFileIsMigratedAndKeepsItsData() throws Exception {
     Path file = dir.resolve("v1.db");
-    try (HistoryRecorder r = HistoryRecorder.start(HistoryFixtures.settings(file))) {
+    try (HistoryRecorder r = HistoryRecorder.start(HistoryFixtures.settings(file),
+        new SchemaMigrator(List.of(HistorySchema.V1)))) {
       r.appendFrame(HistoryFixtures.frame(T0));
       r.appendFrame(HistoryFixtures.frame(T0.plusSeconds(1)));
       assertThat(r.flush(Duration.ofSeconds(10))).isTrue();
@@ -89,7 +90,7 @@ class SchemaMigrationTest {
     try (HistoryRecorder r = HistoryRecorder.start(HistoryFixtures.settings(file))) {
       HistoryHealth h = r.health();
       assertThat(h.state()).isEqualTo(HistoryHealth.State.NOT_KEEPING);
-      assertThat(h.reason()).contains("schema version 99").contains("newer than version 1")
+      assertThat(h.reason()).contains("schema version 99").contains("newer than version " + HistorySchema.currentVersion())
           .contains(file.toString());
       assertThat(r.appendFrame(HistoryFixtures.frame(T0.plusSeconds(5)))).isTrue();
       assertThat(r.flush(Duration.ofSeconds(10))).isTrue();
