@@ -29,8 +29,21 @@ public final class CheckCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    PlatewardConfig cfg = config.load();
     PrintWriter out = spec.commandLine().getOut();
+    if (java.nio.file.Files.isRegularFile(config.file())) {
+      org.plateward.config.FleetConfig fleet = org.plateward.config.FleetConfig.load(config.file());
+      if (fleet.listsUnits()) {
+        out.println(fleet.file() + ": valid, " + fleet.units().size() + " units");
+        for (org.plateward.config.FleetConfig.FleetUnit u : fleet.units()) {
+          out.println("unit " + u.id() + " (" + u.opcua().tags().size() + " tags from " + u.opcuaFile()
+              + " on " + u.opcua().endpointUrl() + "):");
+          out.print(summary(u.config()).replaceAll("(?m)^", "  "));
+        }
+        out.flush();
+        return 0;
+      }
+    }
+    PlatewardConfig cfg = config.load();
     out.print(summary(cfg));
     out.flush();
     return 0;

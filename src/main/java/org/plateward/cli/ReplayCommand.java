@@ -3,10 +3,14 @@ package org.plateward.cli;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.plateward.Advisory;
+import org.plateward.config.FleetConfig;
 import org.plateward.config.PlatewardConfig;
+import org.plateward.config.Spelling;
 import org.plateward.estimation.FilterSettings;
 import java.time.Instant;
 import org.plateward.replay.EstimateWriter;
@@ -29,14 +33,24 @@ import picocli.CommandLine.Option;
     name = "replay",
     mixinStandardHelpOptions = true,
     description = {"Run the estimator over a recorded period (a replay file, or a period of history)"
-        + " and summarise it.", "Either --input F.csv, or --db F --from T1 --to T2 (ISO 8601 times with zone)."})
+        + " and summarise it.", "Either --input F.csv (repeat it for several inputs at once), or --db F --from T1 --to T2 (ISO 8601 times with zone)."})
 public final class ReplayCommand implements Callable<Integer> {
   @CommandLine.Mixin ConfigOption config;
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;
 
-  @Option(names = "--input", paramLabel = "F.csv", description = "Replay file to run.")
-  Path input;
+  @Option(names = "--input", paramLabel = "F.csv",
+      description = {"Replay file to run; repeat for several inputs, run at once on a pool of estimator threads.",
+          "With a configuration that lists several units, write ID=F.csv (the unit the file is replayed as)."})
+  List<String> inputs;
+
+  @Option(names = "--out-dir", paramLabel = "DIR",
+      description = "With one or more inputs: write each input's estimates to DIR/<input name>.estimates.csv.")
+  Path outDir;
+
+  @Option(names = "--threads", paramLabel = "N",
+      description = "Estimator threads for several inputs (default: the available processors).")
+  Integer threads;
 
   @Option(names = "--db", paramLabel = "F", description = "History database to replay a period of.")
   Path db;
@@ -55,7 +69,7 @@ public final class ReplayCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    if ((input == null) == (db == null)) {
+    if ((inputs == null) == (db == null)) {
       throw new CommandLine.ParameterException(spec.commandLine(),
           "give either --input F.csv or --db F --from T1 --to T2");
     }
@@ -65,6 +79,10 @@ public final class ReplayCommand implements Callable<Integer> {
     if (from != null || to != null) {
       throw new CommandLine.ParameterException(spec.commandLine(), "--from and --to go with --db");
     }
+    if (inputs.size() > 1 || outDir != null || threads != null || listsUnits()) {
+      return replayMany();
+    }
+    Path input = Path.of(inputs.get(0));
     PlatewardConfig cfg = config.load();
     if (!Files.isReadable(input)) {
       throw new ReplayFormatException(input.toString(), 0, "--input", "no such file or not readable");
@@ -114,6 +132,79 @@ public final class ReplayCommand implements Callable<Integer> {
     }
     outText.flush();
     return 0;
+  }
+
+  /** Whether the configuration file is a fleet file ({@code [[units]]}). */
+  private boolean listsUnits() throws Exception {
+    Path f = config.file();
+    if (!Files.isRegularFile(f)) {
+      return false; // config.load() reports it
+    }
+    return FleetConfig.load(f).listsUnits();
+  }
+
+  /** Several inputs (or {@code --out-dir}): one estimator per input on the unit pool. */
+  private int replayMany() throws Exception {
+    if (out != null) {
+      throw new CommandLine.ParameterException(spec.commandLine(),
+          "--out names one file; with several inputs (or --out-dir) give --out-dir DIR");
+    }
+    int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
+    if (n < 1) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--threads must be at least 1, got " + n);
+    }
+    if (!Files.isRegularFile(config.file())) {
+      config.load(); // its message for a missing file
+    }
+    FleetConfig fleet = FleetConfig.load(config.file());
+    List<ReplayBatch.Job> jobs = new ArrayList<>();
+    java.util.Set<Path> seenOut = new java.util.HashSet<>();
+    java.util.Set<Path> seenIn = new java.util.HashSet<>();
+    for (String text : inputs) {
+      FleetConfig.FleetUnit unit;
+      Path input;
+      if (fleet.listsUnits()) {
+        int eq = text.indexOf('=');
+        if (eq <= 0) {
+          throw new CommandLine.ParameterException(spec.commandLine(), "--input " + text + ": "
+              + config.file() + " lists several units; write --input ID=F.csv with ID one of " + fleet.ids());
+        }
+        String id = text.substring(0, eq);
+        unit = fleet.unit(id);
+        if (unit == null) {
+          String near = Spelling.closest(id, fleet.ids());
+          throw new CommandLine.ParameterException(spec.commandLine(), "--input " + text + ": no unit '" + id
+              + "' in " + config.file() + (near != null ? "; did you mean '" + near + "'?" : " (units: " + fleet.ids() + ")"));
+        }
+        input = Path.of(text.substring(eq + 1));
+      } else {
+        unit = fleet.units().get(0);
+        input = Path.of(text);
+      }
+      if (!Files.isReadable(input)) {
+        throw new ReplayFormatException(input.toString(), 0, "--input", "no such file or not readable");
+      }
+      if (!seenIn.add(input.toAbsolutePath().normalize())) {
+        throw new CommandLine.ParameterException(spec.commandLine(), "--input " + input + " is given twice");
+      }
+      try (ReplayFrameSource src = ReplayFrameSource.open(input)) {
+        checkUnit(src, unit.unit(), unit.config().file());
+      }
+      Path o = null;
+      if (outDir != null) {
+        String name = input.getFileName().toString().replaceFirst("\\.csv$", "") + ".estimates.csv";
+        o = outDir.resolve(name);
+        if (!seenOut.add(o)) {
+          throw new CommandLine.ParameterException(spec.commandLine(), "two inputs are named "
+              + input.getFileName() + "; their estimates would both go to " + o);
+        }
+      }
+      jobs.add(new ReplayBatch.Job(input, unit.id(), unit.unit(), o));
+    }
+    if (outDir != null) {
+      Files.createDirectories(outDir);
+    }
+    return ReplayBatch.run(jobs, n, spec.commandLine().getOut(), spec.commandLine().getErr());
   }
 
   /** {@code --db F --from T1 --to T2}: a period of history through the same estimator path. */
@@ -196,8 +287,13 @@ public final class ReplayCommand implements Callable<Integer> {
 
   /** The recording's {@code unit=} metadata must name the configured unit when present. */
   private static void checkUnit(ReplayFrameSource src, PlatewardConfig cfg) {
+    checkUnit(src, cfg.unit(), cfg.file());
+  }
+
+  /** The recording's {@code unit=} metadata must name {@code spec} (read from {@code file}) when present. */
+  static void checkUnit(ReplayFrameSource src, org.plateward.reactor.UnitSpec spec, Path file) {
     String unit = src.header().metadata().get("unit");
-    if (unit != null && !unit.equals(cfg.unit().name().replaceAll("[\\s=]+", "_"))) {
+    if (unit != null && !unit.equals(spec.name().replaceAll("[\\s=]+", "_"))) {
       int line = 1;
       for (String c : src.header().comments()) {
         if (c.contains("unit=" + unit)) {
@@ -206,7 +302,7 @@ public final class ReplayCommand implements Callable<Integer> {
         line++;
       }
       throw new ReplayFormatException(src.position(), line, "unit",
-          "recording is of unit '" + unit + "' but the configuration (" + cfg.file() + ") describes '" + cfg.unit().name() + "'");
+          "recording is of unit '" + unit + "' but the configuration (" + file + ") describes '" + spec.name() + "'");
     }
   }
 

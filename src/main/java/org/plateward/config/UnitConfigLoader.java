@@ -49,6 +49,12 @@ public final class UnitConfigLoader {
 
   /** Reads the unit tables of a parsed document; problems go to {@code errors}. */
   static UnitSpec read(TomlDocument doc, ErrorList errors) {
+    if (doc.root().has("units")) {
+      // a fleet file (FleetConfig): say so once instead of one "missing table" per unit table
+      errors.add(doc.lineOf("units", 1), "units", "this file lists several units ([[units]]); "
+          + "give a command that runs one unit the file with that unit's tables (its config = ...)");
+      return null;
+    }
     TableReader u = TableReader.open(doc, errors, "unit", List.of("name", "site"));
     String name = u.text("name");
     String site = u.text("site");

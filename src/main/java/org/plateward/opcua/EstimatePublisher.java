@@ -48,14 +48,19 @@ public final class EstimatePublisher implements AutoCloseable {
    * @param host loopback bind address, e.g. 127.0.0.1
    * @param port TCP port, or 0 for a free one
    * @param namespaceUri namespace of the estimate nodes
-   * @param units names of the units served (letters, digits, '-' and '_')
+   * @param units names of the units served (letters, digits, '-' and '_'), each under its own
+   *     folder {@code Objects/Plateward/<unit>}
    * @throws EndpointPortInUseException when the port is taken
-   * @throws IllegalArgumentException for a non-loopback host or a bad unit name
+   * @throws IllegalArgumentException for a non-loopback host, a bad or a repeated unit name
    */
   public static EstimatePublisher start(String host, int port, String namespaceUri, List<String> units) {
+    java.util.Set<String> seen = new java.util.HashSet<>();
     for (String u : units) {
       if (u == null || !u.matches("[A-Za-z0-9_-]+")) {
         throw new IllegalArgumentException("unit name must be letters, digits, '-' or '_': " + u);
+      }
+      if (!seen.add(u)) {
+        throw new IllegalArgumentException("unit " + u + " is listed twice; each unit has one folder");
       }
     }
     List<String> copy = List.copyOf(units);
@@ -79,6 +84,11 @@ public final class EstimatePublisher implements AutoCloseable {
 
   public String namespaceUri() {
     return namespaceUri;
+  }
+
+  /** The units served, each under its own folder, in the order given at start. */
+  public List<String> units() {
+    return units;
   }
 
   /** NodeId (with the server's namespace index) of one published quantity, by browse name. */
