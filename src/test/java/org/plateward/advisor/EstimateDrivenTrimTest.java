@@ -18,7 +18,7 @@ class EstimateDrivenTrimTest {
 
   @Test
   void closedLoopInSimulationFromTheSoftSensorsPosterior() throws Exception {
-    // simulation only, not perfect information: the soft sensor (60 cells, nominal Nusselt
+    // simulation only, not perfect information: the soft sensor (80 cells, nominal Nusselt
     // 7.541) runs over the fuel-surge plant's readings to 23 min (surge from 20 min, 2 min ramp);
     // the advisor forecasts from its posterior mean with 2 sigma of its peak; the truth is the
     // plant's 200-cell plate (Nusselt 7.9) run on with the scheduled inputs and the trimmed fuel

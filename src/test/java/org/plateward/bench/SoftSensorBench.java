@@ -22,7 +22,7 @@ import org.plateward.softsensor.ReactorSoftSensor;
 import org.plateward.softsensor.SoftSensorSettings;
 
 /**
- * One frame through the reactor soft sensor (60 cells, 79 states, 5 s filter blocks), frames of
+ * One frame through the reactor soft sensor (the configured grid: 80 cells, 105 states; 5 s filter blocks), frames of
  * a committed recording held in memory (no CSV parsing in the figure). The recording is fed in
  * a loop with its times shifted by its length. µs per frame; x real time = 1e6 / figure at 1 Hz.
  */

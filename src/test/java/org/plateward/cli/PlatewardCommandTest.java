@@ -39,7 +39,7 @@ class PlatewardCommandTest {
         .contains("TM-PR1 at Tarnmoor gas-to-liquids pilot")
         .contains("600 mm long x 200 mm wide, 24 channel pairs")
         .contains("0.6 mm copper, melts at 1084.62 degC") // ITS-90: 1357.77 K - 273.15
-        .contains("60 cells");
+        .contains("80 cells");
   }
 
   @Test

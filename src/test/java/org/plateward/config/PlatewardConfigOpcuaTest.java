@@ -30,7 +30,7 @@ class PlatewardConfigOpcuaTest {
   @Test
   void itsProblemsAreReportedWithTheOthers(@TempDir Path dir) throws Exception {
     Path f = dir.resolve("half.toml");
-    Files.writeString(f, Files.readString(ConfigFixtures.DEMO).replace("cells = 60", "cells = 0")
+    Files.writeString(f, Files.readString(ConfigFixtures.DEMO).replace("cells = 80", "cells = 0")
         + "\n[opcua]\nendpoint = \"opc.tcp://localhost:4840\"\n");
     var e = catchThrowableOfType(InvalidConfigException.class, () -> PlatewardConfig.load(f));
     int header = ConfigFixtures.lineOf(f, "^\\[opcua\\]");

@@ -54,8 +54,9 @@ class UnitConfigLoaderTest {
     assertThat(op.combustionPressurePa()).isCloseTo(130e3, within(1e-6));
     var f = u.feedGas();
     assertThat(f.methane() + f.hydrogen() + f.carbonDioxide() + f.nitrogen()).isCloseTo(1.0, within(1e-12));
-    assertThat(u.grid().cells()).isEqualTo(60);
-    assertThat(u.grid().refinementWidthM()).isCloseTo(0.030, within(1e-12));
+    assertThat(u.grid().cells()).isEqualTo(80);
+    assertThat(u.grid().refinement()).isCloseTo(3.5, within(1e-12));
+    assertThat(u.grid().refinementWidthM()).isCloseTo(0.040, within(1e-12));
   }
 
   @Test
@@ -164,7 +165,7 @@ class UnitConfigLoaderTest {
   @Test
   void wholeNumbersMustBeWhole(@TempDir Path dir) throws Exception {
     Path file = dir.resolve("cells.toml");
-    Files.writeString(file, Files.readString(ConfigFixtures.DEMO).replace("cells = 60", "cells = 40.5"));
+    Files.writeString(file, Files.readString(ConfigFixtures.DEMO).replace("cells = 80", "cells = 40.5"));
     var e = catchThrowableOfType(InvalidConfigException.class, () -> PlatewardConfig.load(file));
     assertThat(e.errors()).extracting(ConfigError::format)
         .containsExactly(file + ":" + ConfigFixtures.lineOf(file, "^cells") + ": model.cells: must be a whole number, got 40.5");
