@@ -327,7 +327,7 @@ public final class ExtendedKalmanFilter {
     }
     Matrices.multiply(phi, lu, work); // Y = Φ M
     Matrices.transposeInto(work, lu); // Yᵀ = M Φᵀ
-    Matrices.multiply(phi, lu, c); // Φ M Φᵀ
+    Matrices.multiplySymmetricResult(phi, lu, c); // Φ M Φᵀ (symmetric: upper triangle, mirrored)
   }
 
   // ---------------------------------------------------------------------------------------

@@ -76,6 +76,36 @@ final class Matrices {
     }
   }
 
+  /**
+   * c ← a·b for a product known to be symmetric (Φ M Φᵀ as Φ·(M Φᵀ)): the upper triangle is
+   * computed, the lower one mirrored — half the work of {@link #multiply}, same sums for the
+   * upper triangle. Square n×n; c must not alias a or b.
+   */
+  static void multiplySymmetricResult(double[][] a, double[][] b, double[][] c) {
+    final int n = a.length;
+    for (int i = 0; i < n; i++) {
+      final double[] ci = c[i];
+      java.util.Arrays.fill(ci, i, n, 0.0);
+      final double[] ai = a[i];
+      for (int k = 0; k < n; k++) {
+        final double aik = ai[k];
+        if (aik == 0.0) {
+          continue;
+        }
+        final double[] bk = b[k];
+        for (int j = i; j < n; j++) {
+          ci[j] += aik * bk[j];
+        }
+      }
+    }
+    for (int i = 0; i < n; i++) {
+      final double[] ci = c[i];
+      for (int j = i + 1; j < n; j++) {
+        c[j][i] = ci[j];
+      }
+    }
+  }
+
   /** c ← a·b, a is r×k, b is k×c (c must not alias a or b). */
   static void multiply(double[][] a, double[][] b, double[][] c) {
     final int rows = a.length;

@@ -52,7 +52,7 @@ public final class ReactorSoftSensor {
   /** Window of the observability diagnostic (s): ten minutes, the settling time of the plate. */
   static final double OBSERVABILITY_WINDOW_S = 600.0;
   /** Sub-step near the melting band (s), and how near counts (K of sensible heat). */
-  static final double BAND_SUBSTEP_S = 1.0;
+  static final double BAND_SUBSTEP_S = 2.5;
   static final double BAND_MARGIN_K = 5.0;
 
   private final UnitSpec spec;
@@ -440,7 +440,7 @@ public final class ReactorSoftSensor {
     double dt = tS - lastEpochS;
     double[] before = ekf.state();
     // near the melting band T(e) has kinks that one 5 s linearly implicit step can jump across
-    // (a cell then overshoots by tens of kelvin for one block): there, 1 s sub-steps
+    // (a cell then overshoots by tens of kelvin for one block): there, 2.5 s sub-steps
     int sub = nearBand(before) ? Math.max(1, (int) Math.ceil(dt / BAND_SUBSTEP_S - 1e-9)) : 1;
     dynamics.stepLengthS(Math.min(dt, settings.blockS()) / sub);
     long buildsBefore = dynamics.builds();

@@ -45,8 +45,9 @@
  * causal estimate: no frame sees later data). The extrapolation uses each cell's temperature
  * rate over the last propagation, not its enthalpy rate: extrapolating enthalpy across the
  * kinks of T(e) at the band edges overshot by up to 38 K inside a block. While any cell is within
- * 5 K (of sensible heat) of the melting band the block is propagated in 1 s sub-steps, for the
- * same reason: one 5 s linearly implicit step across a kink put a cell 20–40 K off for a block.
+ * 5 K (of sensible heat) of the melting band the block is propagated in two 2.5 s sub-steps,
+ * for the same reason: one 5 s linearly implicit step across a kink put a cell 20–40 K off for
+ * a block (1 s and 1.7 s sub-steps did no better on the fuel surge).
  *
  * <h2>Jacobian refresh</h2>
  * {@link org.plateward.softsensor.ReactorDynamics} evaluates f every step (one march of each
