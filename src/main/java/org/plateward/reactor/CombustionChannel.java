@@ -73,7 +73,9 @@ final class CombustionChannel {
       double xi = 0.0;
       double nCh4 = f[in + CH4];
       if (coatedAreaM2[j] > 0.0 && nCh4 > 0.0 && activity > 0.0) {
-        double km = nusselt * MixtureProperties.diffusivityInMixtureM2PerS(CH4, x, film, pressurePa)
+        // Sherwood = Nusselt by the heat and mass transfer analogy, so the heat-transfer
+        // multiplier (the plant's Nusselt number over the model's) scales both
+        double km = htMultiplier * nusselt * MixtureProperties.diffusivityInMixtureM2PerS(CH4, x, film, pressurePa)
             / hydraulicDiameterM;
         double keff = CatalyticCombustion.effectiveRateConstantMPerS(activity * ks, km);
         double cTot = pressurePa / (R * tin);

@@ -21,7 +21,9 @@ import org.plateward.thermo.Species;
  * the plate ends are adiabatic. Gas-wall heat transfer uses fully developed laminar flow
  * between parallel plates, h = Nu k / D_h with D_h = 2 gap and Nu = 7.54 (uniform wall
  * temperature, Shah and London 1978); mass transfer to the combustion washcoat uses the same
- * number as Sherwood number (heat and mass transfer analogy).
+ * number as Sherwood number (heat and mass transfer analogy), and the heat-transfer multiplier
+ * of {@link ModelParameters} scales both, since it stands for the plant's Nusselt number over
+ * the model's.
  *
  * <p>Not thread-safe: it keeps per-cell caches. Use one instance per thread.
  */
