@@ -51,6 +51,19 @@ class SteadyStateCalibratorTest {
 
   /** The plant's true value, averaged over the frames of the windows (activities decline slowly). */
   static double truth(FittedParameter p) {
+    return truthOf(rec, p, windows);
+  }
+
+  /** The truth over the steady windows the default detector finds in {@code r}. */
+  static double truthOf(PlateauRecording r, FittedParameter p) {
+    SteadyWindowDetector d = new SteadyWindowDetector(SteadinessTolerances.defaults());
+    for (PlantSample s : r.samples) {
+      d.accept(s.frame());
+    }
+    return truthOf(r, p, d.windows());
+  }
+
+  static double truthOf(PlateauRecording rec, FittedParameter p, List<SteadyWindow> windows) {
     if (p == FittedParameter.HEAT_TRANSFER_MULTIPLIER) {
       return TruthSettings.DEFAULT_NUSSELT / PlateReactorModel.NUSSELT_UNIFORM_WALL_TEMP;
     }
