@@ -134,7 +134,8 @@ public final class Chart {
     int right = x + w - 12;
     int top = y + 24;
     int legendRows = legendRows(fm, right - left);
-    int bottom = y + h - 36 - legendRows * (fm.getHeight() + 2);
+    int bottom = y + h - 34 - legendRows * (fm.getHeight() + 2);
+    int lineH = fm.getHeight() + 2;
     if (right - left < 20 || bottom - top < 20) {
       return;
     }
@@ -158,14 +159,14 @@ public final class Chart {
     g.setFont(bold);
     g.drawString(title, left, y + 16);
     g.setFont(font);
-    g.drawString(xLabel, left + (right - left - fm.stringWidth(xLabel)) / 2, bottom + 30);
+    g.drawString(xLabel, left + (right - left - fm.stringWidth(xLabel)) / 2, bottom + 28);
     if (rows == null && yLabel != null && !yLabel.isEmpty()) {
       java.awt.geom.AffineTransform at = g.getTransform();
       g.rotate(-Math.PI / 2);
       g.drawString(yLabel, -(top + (bottom - top + fm.stringWidth(yLabel)) / 2), x + 12);
       g.setTransform(at);
     }
-    drawLegend(g, fm, left, bottom + 36, right - left);
+    drawLegend(g, fm, left, bottom + 28 + lineH, right - left);
   }
 
   /** Renders the chart alone into a new image. */
