@@ -131,7 +131,7 @@ public final class CalibrateCommand implements Callable<Integer> {
           EdgeUnit.NM3_PER_H.fromSi(w.inputs().fuelFlowMolPerS()));
     }
     PlateReactorModel model = new PlateReactorModel(cfg.unit(), Grid.uniform(cfg.unit().geometry().lengthM(), cells),
-        PlateReactorModel.Options.DEFAULT);
+        PlateReactorModel.Options.DEFAULT.withMultiplierOnMassTransfer());
     ModelParameters start = ModelParameters.nominal(cfg.unit());
     long cpu0 = ManagementFactory.getThreadMXBean().getCurrentThreadCpuTime();
     long wall0 = System.nanoTime();

@@ -21,9 +21,7 @@ import org.plateward.thermo.Species;
  * the plate ends are adiabatic. Gas-wall heat transfer uses fully developed laminar flow
  * between parallel plates, h = Nu k / D_h with D_h = 2 gap and Nu = 7.54 (uniform wall
  * temperature, Shah and London 1978); mass transfer to the combustion washcoat uses the same
- * number as Sherwood number (heat and mass transfer analogy), and the heat-transfer multiplier
- * of {@link ModelParameters} scales both, since it stands for the plant's Nusselt number over
- * the model's.
+ * number as Sherwood number (heat and mass transfer analogy).
  *
  * <p>Not thread-safe: it keeps per-cell caches. Use one instance per thread.
  */
@@ -35,9 +33,25 @@ public final class PlateReactorModel {
    * Numerical and transport options.
    *
    * @param nusselt Nusselt (and Sherwood) number of both channels
+   * @param multiplierOnMassTransfer whether the heat-transfer multiplier of {@link
+   *     ModelParameters} also scales the Sherwood number of the combustion washcoat. By the heat
+   *     and mass transfer analogy a plant whose Nusselt number differs from the model's differs
+   *     in its Sherwood number by the same factor, so a multiplier that stands for that ratio
+   *     scales both; calibration fits with this on. Off by default: the estimator is tuned with
+   *     the multiplier on heat transfer only.
    */
-  public record Options(double nusselt) {
+  public record Options(double nusselt, boolean multiplierOnMassTransfer) {
     public static final Options DEFAULT = new Options(NUSSELT_UNIFORM_WALL_TEMP);
+
+    /** The multiplier on heat transfer only. */
+    public Options(double nusselt) {
+      this(nusselt, false);
+    }
+
+    /** This Nusselt number with the multiplier on heat and mass transfer. */
+    public Options withMultiplierOnMassTransfer() {
+      return new Options(nusselt, true);
+    }
   }
 
   private static final int NS = Species.COUNT;
@@ -69,7 +83,7 @@ public final class PlateReactorModel {
     this.plate = new PlateEnthalpy(g, spec.plate(), spec.buffer());
     this.reforming = new ReformingChannel(
         g, grid, spec.catalyst().reformingLoadingKgPerM2(), options.nusselt());
-    this.combustion = new CombustionChannel(g, grid, options.nusselt());
+    this.combustion = new CombustionChannel(g, grid, options.nusselt(), options.multiplierOnMassTransfer());
     this.widthM = g.widthM();
     this.ambientK = spec.heatLoss().ambientK();
     this.dz = new double[n];

@@ -35,7 +35,7 @@ class SteadyStateCalibratorTest {
     }
     windows = d.windows();
     PlateReactorModel model = new PlateReactorModel(rec.configured,
-        Grid.uniform(rec.configured.geometry().lengthM(), 200), PlateReactorModel.Options.DEFAULT);
+        Grid.uniform(rec.configured.geometry().lengthM(), 200), PlateReactorModel.Options.DEFAULT.withMultiplierOnMassTransfer());
     ThreadMXBean tb = ManagementFactory.getThreadMXBean();
     long c0 = tb.getCurrentThreadCpuTime();
     result = new SteadyStateCalibrator(model, MeasurementSigmas.of(SoftSensorSettings.defaults()))
@@ -135,7 +135,7 @@ class SteadyStateCalibratorTest {
   @Test
   void theFittedOutputsAreTheModelsSteadyStateAtTheFittedParameters() {
     PlateReactorModel model = new PlateReactorModel(rec.configured,
-        Grid.uniform(rec.configured.geometry().lengthM(), 200), PlateReactorModel.Options.DEFAULT);
+        Grid.uniform(rec.configured.geometry().lengthM(), 200), PlateReactorModel.Options.DEFAULT.withMultiplierOnMassTransfer());
     SteadyWindow w = windows.get(1);
     org.plateward.reactor.SteadySummary s = org.plateward.reactor.SteadySummary.solve(model, w.inputs(), result.fitted());
     assertThat(result.predicted()[1][org.plateward.reactor.ModelOutputs.REF_OUTLET_TEMP_K])

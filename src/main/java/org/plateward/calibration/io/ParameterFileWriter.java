@@ -53,6 +53,9 @@ public final class ParameterFileWriter {
     b.append("# as the model and the measurements behind them. Review them (intervals, correlations,\n");
     b.append("# residual plots) before carrying them into a configuration; a parameter marked\n");
     b.append("# identifiable = false is not pinned down by these windows and should not be carried over.\n");
+    b.append("# The fit applies the heat-transfer multiplier to the combustion Sherwood number as well; the\n");
+    b.append("# estimator (as configured now) applies it to heat transfer only, so its combustion activity\n");
+    b.append("# is not directly comparable with the one fitted here.\n");
     b.append("# Source: ").append(source.replace('\n', ' ')).append('\n');
     b.append("# Steady windows: ").append(tolerances).append('\n');
     b.append('\n');
@@ -65,7 +68,7 @@ public final class ParameterFileWriter {
     b.append('\n');
     b.append("[heat_transfer]\n");
     b.append("multiplier = ").append(num(r.fitted().heatTransferMultiplier()))
-        .append("   # on the gas-wall heat- and mass-transfer coefficients (model Nu = 7.541)\n");
+        .append("   # on the gas-wall heat- and mass-transfer coefficients (model Nu = Sh = 7.541)\n");
     b.append('\n');
     b.append("[calibration]\n");
     b.append("fitted_at = \"").append(fittedAt).append("\"\n");
