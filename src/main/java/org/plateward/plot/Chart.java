@@ -157,7 +157,13 @@ public final class Chart {
     g.drawRect(left, top, right - left, bottom - top);
     Font bold = font.deriveFont(Font.BOLD, 12f);
     g.setFont(bold);
-    g.drawString(title, left, y + 16);
+    String shown = title;
+    FontMetrics bm = g.getFontMetrics();
+    while (shown.length() > 4 && bm.stringWidth(shown) > x + w - 6 - left) {
+      shown = shown.substring(0, shown.length() - 2) + "…";
+      shown = shown.substring(0, shown.length() - 2) + "…";
+    }
+    g.drawString(shown, left, y + 16);
     g.setFont(font);
     g.drawString(xLabel, left + (right - left - fm.stringWidth(xLabel)) / 2, bottom + 28);
     if (rows == null && yLabel != null && !yLabel.isEmpty()) {
