@@ -74,6 +74,30 @@ class CalibrateCommandTest {
     assertThat(Files.readAllBytes(params)).isEqualTo(before);
   }
 
+  @Test
+  void aHistoryPeriodGivesTheSameWindowsAsTheReplayFile() throws Exception {
+    PlateauRecording rec = PlateauRecording.run();
+    Path db = dir.resolve("history.db");
+    try (org.plateward.history.HistoryRecorder h = org.plateward.history.HistoryRecorder.start(
+        org.plateward.history.HistorySettings.at(db))) {
+      for (var s : rec.samples) {
+        h.appendFrame(s.frame());
+      }
+      assertThat(h.flush(java.time.Duration.ofSeconds(60))).isTrue();
+    }
+    java.time.Instant from = rec.samples.get(0).frame().time();
+    java.time.Instant to = rec.samples.get(rec.samples.size() - 1).frame().time().plusSeconds(1);
+    // a coarse grid keeps this fast; the windows do not depend on it
+    Run r = run("calibrate", "--db", db.toString(), "--from", from.toString(), "--to", to.toString(), "--cells", "30");
+    assertThat(r.exit()).as(r.err()).isZero();
+    SteadyWindowDetector d = new SteadyWindowDetector(SteadinessTolerances.defaults());
+    rec.samples.forEach(s -> d.accept(s.frame()));
+    assertThat(r.out()).contains(d.windows().size() + " steady windows in " + db);
+    for (SteadyWindow w : d.windows()) {
+      assertThat(r.out()).contains(w.from() + " .. " + w.to());
+    }
+  }
+
   /** The first {@code rows} data rows of a committed recording. */
   private Path cut(String name, int rows) throws Exception {
     List<String> out = new ArrayList<>();
