@@ -29,16 +29,16 @@ public final class KeyFigures {
     ReportPoint hot = r.hottest();
     if (hot != null) {
       f.add(new KeyFigure("peak_max", num(hot.peakTempK() - 273.15, 1), "degC", "highest hidden peak plate temperature"));
-      f.add(new KeyFigure("peak_max_sd", num(hot.peakTempSdK(), 1), "K", "its standard deviation"));
-      f.add(new KeyFigure("peak_max_time", hot.time().toString(), "", "when"));
-      f.add(new KeyFigure("peak_max_position", num(1000 * hot.peakPositionM(), 0), "mm", "where, from the reforming inlet"));
+      f.add(new KeyFigure("peak_max_sd", num(hot.peakTempSdK(), 1), "K", "standard deviation of the highest hidden peak"));
+      f.add(new KeyFigure("peak_max_time", hot.time().toString(), "", "time of the highest hidden peak"));
+      f.add(new KeyFigure("peak_max_position", num(1000 * hot.peakPositionM(), 0), "mm", "position of the highest hidden peak from the reforming inlet"));
     }
     double[] maxMelt = r.series(4);
     double[] melt = r.series(3);
     int iMelt = argMax(maxMelt);
     if (iMelt >= 0) {
       f.add(new KeyFigure("max_cell_melt_max", num(100 * maxMelt[iMelt], 1), "%", "largest melt fraction of any cell"));
-      f.add(new KeyFigure("max_cell_melt_max_time", t.get(iMelt).toString(), "", "when"));
+      f.add(new KeyFigure("max_cell_melt_max_time", t.get(iMelt).toString(), "", "time of the largest cell melt fraction"));
     }
     int iOverall = argMax(melt);
     if (iOverall >= 0) {
@@ -52,7 +52,7 @@ public final class KeyFigures {
     f.add(new KeyFigure("time_to_exhaust_min", iTte < 0 ? "" : num(tte[iTte] / 60.0, 1), "min",
         iTte < 0 ? "no exhaustion forecast in the period" : "shortest forecast time-to-exhaust"));
     if (iTte >= 0) {
-      f.add(new KeyFigure("time_to_exhaust_min_time", t.get(iTte).toString(), "", "when"));
+      f.add(new KeyFigure("time_to_exhaust_min_time", t.get(iTte).toString(), "", "time of the shortest time-to-exhaust"));
     }
     for (Map.Entry<String, Long> e : r.statusCounts().entrySet()) {
       f.add(new KeyFigure("estimator_" + e.getKey(), num(100.0 * e.getValue() / r.size(), 1), "%",
