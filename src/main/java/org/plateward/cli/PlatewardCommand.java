@@ -33,7 +33,7 @@ public final class PlatewardCommand implements Runnable {
    */
   static List<Supplier<Object>> subcommands() {
     return List.of(CheckCommand::new, SteadyCommand::new, PlantCommand::new, ReplayCommand::new,
-        WatchCommand::new, DemoCommand::new);
+        CalibrateCommand::new, ReportCommand::new, WatchCommand::new, DemoCommand::new);
   }
 
   @CommandLine.Spec CommandLine.Model.CommandSpec spec;

@@ -25,6 +25,7 @@ final class CombustionChannel {
   private final double[] wallAreaM2;
   private final double hydraulicDiameterM;
   private final double nusselt;
+  private final boolean multiplierOnMassTransfer;
   private final double[] surfaceRateCache;
   private final double[] x = new double[NS];
   private final double[] q = new double[2];
@@ -32,6 +33,15 @@ final class CombustionChannel {
   private final GasFlux gas = new GasFlux();
 
   CombustionChannel(Geometry g, Grid grid, double nusselt) {
+    this(g, grid, nusselt, false);
+  }
+
+  /**
+   * @param multiplierOnMassTransfer whether the heat-transfer multiplier also scales the
+   *     Sherwood number (see {@link PlateReactorModel.Options})
+   */
+  CombustionChannel(Geometry g, Grid grid, double nusselt, boolean multiplierOnMassTransfer) {
+    this.multiplierOnMassTransfer = multiplierOnMassTransfer;
     this.cells = grid.cells();
     this.coatedAreaM2 = new double[cells];
     this.wallAreaM2 = new double[cells];
@@ -73,8 +83,8 @@ final class CombustionChannel {
       double xi = 0.0;
       double nCh4 = f[in + CH4];
       if (coatedAreaM2[j] > 0.0 && nCh4 > 0.0 && activity > 0.0) {
-        // Sh = Nu (heat and mass transfer analogy): the multiplier on Nu moves Sh with it
-        double km = htMultiplier * nusselt * MixtureProperties.diffusivityInMixtureM2PerS(CH4, x, film, pressurePa)
+        // Sh = Nu (heat and mass transfer analogy); optionally scaled like h
+        double km = (multiplierOnMassTransfer ? htMultiplier : 1.0) * nusselt * MixtureProperties.diffusivityInMixtureM2PerS(CH4, x, film, pressurePa)
             / hydraulicDiameterM;
         double keff = CatalyticCombustion.effectiveRateConstantMPerS(activity * ks, km);
         double cTot = pressurePa / (R * tin);

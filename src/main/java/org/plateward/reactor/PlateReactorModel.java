@@ -34,9 +34,30 @@ public final class PlateReactorModel {
    * Numerical and transport options.
    *
    * @param nusselt Nusselt (and Sherwood) number of both channels
+   * @param multiplierOnMassTransfer whether the heat-transfer multiplier of {@link
+   *     ModelParameters} also scales the Sherwood number of the combustion washcoat. By the heat
+   *     and mass transfer analogy a plant whose Nusselt number differs from the model's differs
+   *     in its Sherwood number by the same factor, so a multiplier that stands for that ratio
+   *     scales both. On by default (the estimator and calibration both use it); off only to
+   *     compare with the heat-transfer-only variant.
    */
-  public record Options(double nusselt) {
+  public record Options(double nusselt, boolean multiplierOnMassTransfer) {
     public static final Options DEFAULT = new Options(NUSSELT_UNIFORM_WALL_TEMP);
+
+    /** The multiplier on heat and mass transfer (the analogy). */
+    public Options(double nusselt) {
+      this(nusselt, true);
+    }
+
+    /** This Nusselt number with the multiplier on heat transfer only. */
+    public Options withMultiplierOnHeatTransferOnly() {
+      return new Options(nusselt, false);
+    }
+
+    /** This Nusselt number with the multiplier on heat and mass transfer. */
+    public Options withMultiplierOnMassTransfer() {
+      return new Options(nusselt, true);
+    }
   }
 
   private static final int NS = Species.COUNT;
@@ -68,7 +89,7 @@ public final class PlateReactorModel {
     this.plate = new PlateEnthalpy(g, spec.plate(), spec.buffer());
     this.reforming = new ReformingChannel(
         g, grid, spec.catalyst().reformingLoadingKgPerM2(), options.nusselt());
-    this.combustion = new CombustionChannel(g, grid, options.nusselt());
+    this.combustion = new CombustionChannel(g, grid, options.nusselt(), options.multiplierOnMassTransfer());
     this.widthM = g.widthM();
     this.ambientK = spec.heatLoss().ambientK();
     this.dz = new double[n];
