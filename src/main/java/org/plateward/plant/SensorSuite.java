@@ -69,6 +69,20 @@ public record SensorSuite(Map<Signal, SensorSpec> sensors, double analyzerPeriod
     return new SensorSuite(m, DEFAULT_ANALYZER_PERIOD_S, DEFAULT_ANALYZER_DEAD_TIME_S);
   }
 
+  /**
+   * The same sensors with no systematic error (calibrated perfectly): for tests that isolate
+   * what the noise alone does, or that check recovery of model parameters, which a meter offset
+   * would bias (no fit from boundary data can tell a meter offset from a parameter).
+   */
+  public SensorSuite withoutSystematicErrors() {
+    Map<Signal, SensorSpec> m = new java.util.EnumMap<>(Signal.class);
+    for (Map.Entry<Signal, SensorSpec> e : sensors.entrySet()) {
+      SensorSpec s = e.getValue();
+      m.put(e.getKey(), new SensorSpec(s.noiseSd(), s.relativeNoise(), s.lagS(), s.quantum()));
+    }
+    return new SensorSuite(m, analyzerPeriodS, analyzerDeadTimeS);
+  }
+
   public SensorSuite withAnalyzer(double periodS, double deadTimeS) {
     return new SensorSuite(sensors, periodS, deadTimeS);
   }

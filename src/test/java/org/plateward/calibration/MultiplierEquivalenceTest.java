@@ -22,8 +22,8 @@ class MultiplierEquivalenceTest {
     UnitSpec u = PlateauRecording.demoUnit();
     Grid g = Grid.uniform(u.geometry().lengthM(), 40);
     double m = 7.9 / PlateReactorModel.NUSSELT_UNIFORM_WALL_TEMP;
-    PlateReactorModel both = new PlateReactorModel(u, g, PlateReactorModel.Options.DEFAULT.withMultiplierOnMassTransfer());
-    PlateReactorModel heatOnly = new PlateReactorModel(u, g, PlateReactorModel.Options.DEFAULT);
+    PlateReactorModel both = new PlateReactorModel(u, g, PlateReactorModel.Options.DEFAULT);
+    PlateReactorModel heatOnly = new PlateReactorModel(u, g, PlateReactorModel.Options.DEFAULT.withMultiplierOnHeatTransferOnly());
     PlateReactorModel plant = new PlateReactorModel(u, g, new PlateReactorModel.Options(7.9));
     ModelParameters p = ModelParameters.nominal(u);
     double[] e = new double[g.cells()];
