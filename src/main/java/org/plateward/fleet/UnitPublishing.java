@@ -53,9 +53,12 @@ public final class UnitPublishing {
   /**
    * What the publisher serves for an estimate: degC for the peak, a time-to-exhaust of +Inf
    * when the estimator runs but forecasts no melt-through within its horizon (the same
-   * conversion as the single-unit live monitor).
+   * conversion serves the single-unit live monitor).
+   *
+   * @param e the estimate
+   * @param activeAlarms number of alarms active now
    */
-  static PublishedEstimate published(Estimate e, int activeAlarms) {
+  public static PublishedEstimate published(Estimate e, int activeAlarms) {
     boolean running = Double.isFinite(e.peakPlateTempK());
     double tte = e.timeToExhaustS();
     double tteSd = e.timeToExhaustSdS();

@@ -558,21 +558,9 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
         e.reason() == null || e.reason().isEmpty() ? null : e.reason(), p, temps, melt);
   }
 
-  /**
-   * What the publisher serves: degC for the peak, and a time-to-exhaust of +Inf when the
-   * estimator runs but forecasts no melt-through within its horizon.
-   */
+  /** What the publisher serves for an estimate (see {@link org.plateward.fleet.UnitPublishing#published}). */
   static PublishedEstimate published(Estimate e, int activeAlarms) {
-    boolean running = Double.isFinite(e.peakPlateTempK());
-    double tte = e.timeToExhaustS();
-    double tteSd = e.timeToExhaustSdS();
-    if (running && Double.isNaN(tte)) {
-      tte = Double.POSITIVE_INFINITY;
-      tteSd = Double.NaN;
-    }
-    return new PublishedEstimate(e.time(), e.peakPlateTempK() - 273.15, e.peakPlateTempSdK(),
-        e.peakPositionM(), e.bufferMeltFraction(), e.maxCellMeltFraction(), tte, tteSd,
-        e.status().text() + (e.reason() == null || e.reason().isEmpty() ? "" : ": " + e.reason()), activeAlarms);
+    return org.plateward.fleet.UnitPublishing.published(e, activeAlarms);
   }
 
   /** Where history is kept (for messages). */
