@@ -67,6 +67,51 @@ public final class MinMaxDecimator {
     return filled;
   }
 
+  /**
+   * The envelope of a band v ± k·sd per column: {@code lower[c]} the smallest v − k·sd and
+   * {@code upper[c]} the largest v + k·sd of the samples in column c (NaN when none has both a
+   * finite value and a finite sd).
+   *
+   * @param k the band's half-width in standard deviations, &ge; 0
+   * @return the number of columns that got a value
+   */
+  public static int decimateBand(double[] timeS, double[] value, double[] sd, double k, int count,
+      double t0S, double t1S, int columns, double[] lower, double[] upper) {
+    if (!(t1S > t0S) || columns <= 0 || lower.length < columns || upper.length < columns) {
+      throw new IllegalArgumentException("need t1 > t0, columns > 0 and output arrays of that length");
+    }
+    for (int c = 0; c < columns; c++) {
+      lower[c] = Double.NaN;
+      upper[c] = Double.NaN;
+    }
+    double span = t1S - t0S;
+    int filled = 0;
+    for (int i = firstAtOrAfter(timeS, count, t0S); i < count; i++) {
+      double t = timeS[i];
+      if (t >= t1S) {
+        break;
+      }
+      double lo = value[i] - k * sd[i];
+      double hi = value[i] + k * sd[i];
+      if (Double.isNaN(lo) || Double.isNaN(hi)) {
+        continue;
+      }
+      int c = column(t, t0S, span, columns);
+      if (c < 0 || c >= columns) {
+        continue;
+      }
+      if (Double.isNaN(lower[c])) {
+        lower[c] = lo;
+        upper[c] = hi;
+        filled++;
+      } else {
+        lower[c] = Math.min(lower[c], lo);
+        upper[c] = Math.max(upper[c], hi);
+      }
+    }
+    return filled;
+  }
+
   /** The column of time t: floor((t − t0) · W / (t1 − t0)), evaluated in that order. */
   static int column(double t, double t0S, double spanS, int columns) {
     return (int) Math.floor((t - t0S) * columns / spanS);
