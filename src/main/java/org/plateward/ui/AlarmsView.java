@@ -226,17 +226,31 @@ final class AlarmsView implements TimelineView {
               shown.size(), normal, suppressed));
     }
     List<AlarmEvent> ev = tl.events();
-    if (ev.size() != shownEvents || upTo != shownUpToS) {
-      shownEvents = ev.size();
+    int upToCount = eventsUpTo(ev, upTo);
+    if (upToCount != shownEvents) {
+      shownEvents = upToCount;
       shownUpToS = upTo;
       List<AlarmEvent> r = new ArrayList<>();
-      for (int k = ev.size() - 1; k >= 0 && r.size() < 200; k--) {
-        if (Timeline.seconds(ev.get(k).time()) <= upTo + 1e-6) {
-          r.add(ev.get(k));
-        }
+      for (int k = upToCount - 1; k >= 0 && r.size() < 200; k--) {
+        r.add(ev.get(k));
       }
       recentRows.setAll(r);
     }
+  }
+
+  /** How many of the events (in time order) are at or before t. */
+  private static int eventsUpTo(List<AlarmEvent> ev, double tS) {
+    int lo = 0;
+    int hi = ev.size();
+    while (lo < hi) {
+      int mid = (lo + hi) >>> 1;
+      if (Timeline.seconds(ev.get(mid).time()) <= tS + 1e-6) {
+        lo = mid + 1;
+      } else {
+        hi = mid;
+      }
+    }
+    return lo;
   }
 
   private void act(ActionKind kind) {

@@ -34,6 +34,10 @@ public final class ControlRoomWindow {
   private final SnapshotMailbox mailbox = new SnapshotMailbox(20_000);
   private final Timeline timeline = new Timeline();
   private final PulseTimings timings = new PulseTimings(4096);
+  private final PulseTimings cpuTimings = new PulseTimings(4096);
+  private final PulseTimings[] viewTimings = new PulseTimings[6];
+  private final java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
+  private long lastReplayNs;
   private final ReplayCursor cursor;
   private final StatusStrip strip = new StatusStrip();
   private final TabPane tabs = new TabPane();
@@ -51,7 +55,7 @@ public final class ControlRoomWindow {
   private long lastRedrawNs;
   private long lastStatusNs;
   private int shownIndex = -2;
-  private int shownSize = -1;
+  private long shownVersion = -1;
   private TimelineView shownView;
 
   /**
@@ -88,6 +92,9 @@ public final class ControlRoomWindow {
     root.setBottom(caution);
     root.setStyle("-fx-base: " + Palette.css(Palette.BACKGROUND) + "; -fx-background-color: "
         + Palette.css(Palette.BACKGROUND) + "; -fx-font-size: 12px;");
+    for (int i = 0; i < viewTimings.length; i++) {
+      viewTimings[i] = new PulseTimings(2048);
+    }
     pulse = new AnimationTimer() {
       @Override
       public void handle(long now) {
@@ -136,6 +143,7 @@ public final class ControlRoomWindow {
 
   private void onPulse(long now) {
     long t0 = System.nanoTime();
+    long c0 = threads.getCurrentThreadCpuTime();
     batch.clear();
     mailbox.drainTo(batch, BATCH);
     for (Snapshot s : batch) {
@@ -147,21 +155,24 @@ public final class ControlRoomWindow {
     if (cursor != null) {
       double c = cursor.tick(wallDt, timeline);
       index = Double.isNaN(c) ? -1 : timeline.indexAt(c);
-      replay.refresh(timeline, c);
+      if (now - lastReplayNs >= STATUS_NS) {
+        replay.refresh(timeline, c);
+        lastReplayNs = now;
+      }
       boolean atHead = index == timeline.size() - 1;
       alarms.allowActions(atHead, "actions apply at the latest estimated time: go there first (Ctrl+End)");
     } else {
       index = timeline.size() - 1;
     }
     TimelineView view = views.get(tabs.getSelectionModel().getSelectedIndex());
-    boolean changed = index != shownIndex || timeline.size() != shownSize || view != shownView;
+    boolean changed = index != shownIndex || timeline.version() != shownVersion || view != shownView;
     if (changed && (view != shownView || now - lastRedrawNs >= REDRAW_NS)) {
       view.show(timeline, index);
       if (view != alarms) {
         alarms.show(timeline, index); // cheap unless the alarm list changed
       }
       shownIndex = index;
-      shownSize = timeline.size();
+      shownVersion = timeline.version();
       shownView = view;
       lastRedrawNs = now;
     }
@@ -169,7 +180,10 @@ public final class ControlRoomWindow {
       strip.update(feed.status(), timeline, index);
       lastStatusNs = now;
     }
-    timings.add(System.nanoTime() - t0);
+    long busy = System.nanoTime() - t0;
+    timings.add(busy);
+    cpuTimings.add(threads.getCurrentThreadCpuTime() - c0);
+    viewTimings[tabs.getSelectionModel().getSelectedIndex()].add(busy);
   }
 
   // --- for tests, screenshots and the benchmark ------------------------------------------------
@@ -180,6 +194,16 @@ public final class ControlRoomWindow {
 
   PulseTimings timings() {
     return timings;
+  }
+
+  /** The FX thread's CPU time per pulse (excludes time the thread waited for a core). */
+  PulseTimings cpuTimings() {
+    return cpuTimings;
+  }
+
+  /** Busy time per pulse while view i was shown. */
+  PulseTimings viewTimings(int i) {
+    return viewTimings[i];
   }
 
   ReplayCursor cursor() {

@@ -46,6 +46,7 @@ final class HealthView implements TimelineView {
   private int derived;
   private Timeline last;
   private int index = -1;
+  private long tableAtNs;
 
   HealthView() {
     status.setId("health-status");
@@ -106,6 +107,13 @@ final class HealthView implements TimelineView {
     status.setText("estimator " + st.text().toUpperCase(Locale.ROOT) + (reason.isEmpty() ? "" : ": " + reason));
     status.setStyle(st == EstimatorStatus.UNTRUSTWORTHY ? "-fx-text-fill: " + Palette.css(Palette.IMMEDIATE) + "; -fx-font-weight: bold;"
         : st == EstimatorStatus.DEGRADED ? "-fx-font-weight: bold;" : "");
+    derive(tl);
+    redraw();
+    long now = System.nanoTime();
+    if (now - tableAtNs < 400_000_000L) {
+      return; // the signal table (labels, CSS) at most 2.5 times a second
+    }
+    tableAtNs = now;
     for (Signal s : Signal.values()) {
       double v = tl.value(s, i);
       value[s.ordinal()].setText(Double.isFinite(v)
@@ -135,8 +143,6 @@ final class HealthView implements TimelineView {
         use[s.ordinal()].setText("model input");
       }
     }
-    derive(tl);
-    redraw();
   }
 
   /** NIS per dof and its band for the frames not yet derived (kept beside the timeline). */

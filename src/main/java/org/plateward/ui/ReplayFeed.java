@@ -80,6 +80,8 @@ public final class ReplayFeed implements DisplayFeed {
   private TrimSuggestion advice;
   private double adviceAtS = Double.NEGATIVE_INFINITY;
   private Instant headTime;
+  private Snapshot lastSnapshot;
+  private Consumer<Snapshot> sink;
 
   private ReplayFeed(UnitSpec unit, AlarmSettings alarms, String sourceName, FrameSource source,
       double firstS, double lastS, long frameCount, HistoryRecorder audit) {
@@ -206,6 +208,7 @@ public final class ReplayFeed implements DisplayFeed {
   }
 
   private void loop(Consumer<Snapshot> sink) {
+    this.sink = sink;
     try {
       while (!closed) {
         Runnable a;
@@ -238,6 +241,7 @@ public final class ReplayFeed implements DisplayFeed {
             }
           }
         }
+        lastSnapshot = s;
         sink.accept(s);
       }
     } catch (InterruptedException e) {
@@ -318,6 +322,13 @@ public final class ReplayFeed implements DisplayFeed {
           case REMOVE_FROM_SERVICE -> board.removeFromService(now, who, alarm, reason);
           case RETURN_TO_SERVICE -> board.returnToService(now, who, alarm, reason);
         };
+        if (r.accepted() && lastSnapshot != null && sink != null) {
+          // the same frame again with the statuses after the action, so the window shows it now
+          Snapshot p = lastSnapshot;
+          lastSnapshot = new Snapshot(p.frame(), p.estimate(), p.predictedSi(), p.fastStatus(), board.statuses(),
+              r.events(), p.advice());
+          sink.accept(lastSnapshot);
+        }
         f.complete(r);
       } catch (RuntimeException ex) {
         f.completeExceptionally(ex);

@@ -38,15 +38,34 @@ public final class Timeline {
   private Object[] alarms = new Object[1024];
   private Object[] advice = new Object[1024];
   private final List<AlarmEvent> events = new ArrayList<>();
+  private Estimate lastEstimate;
+  private long version;
+
+  /** Counts every change (append or update), so a view knows when to redraw. */
+  public long version() {
+    return version;
+  }
 
   /** Frames held. */
   public int size() {
     return size;
   }
 
-  /** Appends one snapshot; times must not go backwards. */
+  /**
+   * Appends one snapshot; times must not go backwards. A snapshot of the same estimate as the
+   * last one (the feed re-sends it after an operator action) only replaces the alarm statuses
+   * and adds the action's transitions.
+   */
   public void append(Snapshot s) {
     Estimate e = s.estimate();
+    version++;
+    if (size > 0 && e == lastEstimate) {
+      alarms[size - 1] = s.alarms();
+      advice[size - 1] = s.advice();
+      events.addAll(s.events());
+      return;
+    }
+    lastEstimate = e;
     double t = seconds(e.time());
     if (size > 0 && t < timeS[size - 1]) {
       throw new IllegalArgumentException("snapshot at " + e.time() + " is before the last one held");
