@@ -175,6 +175,7 @@ final class HealthView implements TimelineView {
     GraphicsContext g = nisCanvas.canvas().getGraphicsContext2D();
     double w = nisCanvas.canvas().getWidth();
     double h = nisCanvas.canvas().getHeight();
+    g.clearRect(0, 0, w, h);
     g.setFill(Palette.BACKGROUND);
     g.fillRect(0, 0, w, h);
     if (last == null || index < 0) {
@@ -194,6 +195,8 @@ final class HealthView implements TimelineView {
     GraphicsContext o = obsCanvas.canvas().getGraphicsContext2D();
     double ow = obsCanvas.canvas().getWidth();
     double oh = obsCanvas.canvas().getHeight();
+
+    o.clearRect(0, 0, ow, oh);
     o.setFill(Palette.BACKGROUND);
     o.fillRect(0, 0, ow, oh);
     o.setFill(Palette.TEXT);

@@ -35,33 +35,83 @@ public final class MinMaxDecimator {
       throw new IllegalArgumentException("need t1 > t0, columns > 0 and output arrays of that length; got t0="
           + t0S + " t1=" + t1S + " columns=" + columns);
     }
-    for (int c = 0; c < columns; c++) {
-      min[c] = Double.NaN;
-      max[c] = Double.NaN;
+    int[] starts = new int[columns + 1];
+    columnStarts(timeS, count, t0S, t1S, columns, starts);
+    return decimate(value, starts, columns, min, max);
+  }
+
+  /**
+   * Where each column's samples begin: {@code starts[c]} is the first sample of column c or a
+   * later one, {@code starts[columns]} one past the last sample before t1; column c holds the
+   * samples [starts[c], starts[c + 1]). The column function is monotone in t, so each boundary
+   * is a binary search (O(W log n)), and every series on the same times shares them.
+   *
+   * @param starts receives columns + 1 indices
+   */
+  public static void columnStarts(double[] timeS, int count, double t0S, double t1S, int columns, int[] starts) {
+    if (!(t1S > t0S) || columns <= 0 || starts.length < columns + 1) {
+      throw new IllegalArgumentException("need t1 > t0, columns > 0 and columns + 1 starts");
     }
     double span = t1S - t0S;
+    int first = firstAtOrAfter(timeS, count, t0S);
+    int end = firstAtOrAfter(timeS, count, t1S);
+    starts[0] = first;
+    for (int c = 1; c < columns; c++) {
+      // first index in [starts[c-1], end) whose column is >= c
+      int lo = starts[c - 1];
+      int hi = end;
+      while (lo < hi) {
+        int mid = (lo + hi) >>> 1;
+        if (column(timeS[mid], t0S, span, columns) < c) {
+          lo = mid + 1;
+        } else {
+          hi = mid;
+        }
+      }
+      starts[c] = lo;
+    }
+    // samples whose column rounds to W or beyond (t just below t1) are left out, as in the formula
+    int lo = columns > 1 ? starts[columns - 1] : first;
+    int hi = end;
+    while (lo < hi) {
+      int mid = (lo + hi) >>> 1;
+      if (column(timeS[mid], t0S, span, columns) < columns) {
+        lo = mid + 1;
+      } else {
+        hi = mid;
+      }
+    }
+    starts[columns] = lo;
+  }
+
+  /**
+   * Min and max per column of one series over column boundaries from {@link #columnStarts}.
+   *
+   * @return the number of columns that got a value
+   */
+  public static int decimate(double[] value, int[] starts, int columns, double[] min, double[] max) {
     int filled = 0;
-    for (int i = firstAtOrAfter(timeS, count, t0S); i < count; i++) {
-      double t = timeS[i];
-      if (t >= t1S) {
-        break;
+    for (int c = 0; c < columns; c++) {
+      double lo = Double.NaN;
+      double hi = Double.NaN;
+      for (int i = starts[c], e = starts[c + 1]; i < e; i++) {
+        double v = value[i];
+        if (v != v) {
+          continue; // NaN
+        }
+        if (lo != lo) {
+          lo = v;
+          hi = v;
+        } else if (v < lo) {
+          lo = v;
+        } else if (v > hi) {
+          hi = v;
+        }
       }
-      double v = value[i];
-      if (Double.isNaN(v)) {
-        continue;
-      }
-      int c = column(t, t0S, span, columns);
-      if (c < 0 || c >= columns) {
-        continue; // rounding at the window's edges
-      }
-      if (Double.isNaN(min[c])) {
-        min[c] = v;
-        max[c] = v;
+      min[c] = lo;
+      max[c] = hi;
+      if (lo == lo) {
         filled++;
-      } else if (v < min[c]) {
-        min[c] = v;
-      } else if (v > max[c]) {
-        max[c] = v;
       }
     }
     return filled;
@@ -80,33 +130,36 @@ public final class MinMaxDecimator {
     if (!(t1S > t0S) || columns <= 0 || lower.length < columns || upper.length < columns) {
       throw new IllegalArgumentException("need t1 > t0, columns > 0 and output arrays of that length");
     }
-    for (int c = 0; c < columns; c++) {
-      lower[c] = Double.NaN;
-      upper[c] = Double.NaN;
-    }
-    double span = t1S - t0S;
+    int[] starts = new int[columns + 1];
+    columnStarts(timeS, count, t0S, t1S, columns, starts);
+    return decimateBand(value, sd, k, starts, columns, lower, upper);
+  }
+
+  /** The band envelope over column boundaries from {@link #columnStarts}. */
+  public static int decimateBand(double[] value, double[] sd, double k, int[] starts, int columns,
+      double[] lower, double[] upper) {
     int filled = 0;
-    for (int i = firstAtOrAfter(timeS, count, t0S); i < count; i++) {
-      double t = timeS[i];
-      if (t >= t1S) {
-        break;
+    for (int c = 0; c < columns; c++) {
+      double lo = Double.NaN;
+      double hi = Double.NaN;
+      for (int i = starts[c], e = starts[c + 1]; i < e; i++) {
+        double l = value[i] - k * sd[i];
+        double h = value[i] + k * sd[i];
+        if (l != l || h != h) {
+          continue; // NaN
+        }
+        if (lo != lo) {
+          lo = l;
+          hi = h;
+        } else {
+          lo = Math.min(lo, l);
+          hi = Math.max(hi, h);
+        }
       }
-      double lo = value[i] - k * sd[i];
-      double hi = value[i] + k * sd[i];
-      if (Double.isNaN(lo) || Double.isNaN(hi)) {
-        continue;
-      }
-      int c = column(t, t0S, span, columns);
-      if (c < 0 || c >= columns) {
-        continue;
-      }
-      if (Double.isNaN(lower[c])) {
-        lower[c] = lo;
-        upper[c] = hi;
+      lower[c] = lo;
+      upper[c] = hi;
+      if (lo == lo) {
         filled++;
-      } else {
-        lower[c] = Math.min(lower[c], lo);
-        upper[c] = Math.max(upper[c], hi);
       }
     }
     return filled;

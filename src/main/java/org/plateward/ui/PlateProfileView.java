@@ -55,6 +55,7 @@ final class PlateProfileView implements TimelineView {
     GraphicsContext g = canvas.canvas().getGraphicsContext2D();
     double w = canvas.canvas().getWidth();
     double h = canvas.canvas().getHeight();
+    g.clearRect(0, 0, w, h);
     g.setFill(Palette.BACKGROUND);
     g.fillRect(0, 0, w, h);
     g.setFont(TraceChart.LABEL);

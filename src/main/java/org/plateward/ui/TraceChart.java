@@ -25,6 +25,14 @@ final class TraceChart {
 
   private double[] a = new double[0];
   private double[] b = new double[0];
+  /** The last decimations, so the range and the trace of one series share one pass. */
+  private final java.util.Map<Object, double[][]> memo = new java.util.IdentityHashMap<>();
+  private long memoVersion = -1;
+  private double memoT0 = Double.NaN;
+  private double memoT1 = Double.NaN;
+  private int memoColumns = -1;
+  private Timeline memoTimeline;
+  private int[] starts = new int[1];
   private double[] xs = new double[0];
   private double[] ys = new double[0];
 
@@ -67,13 +75,41 @@ final class TraceChart {
   }
 
   /**
+   * Fills {@code a}/{@code b} with the min/max per column of a series, from the memo when the
+   * same series was decimated for the same timeline state, window and width.
+   */
+  private void decimated(Timeline tl, double[] values, Box box) {
+    int n = box.columns();
+    if (tl != memoTimeline || tl.version() != memoVersion || box.t0S != memoT0 || box.t1S != memoT1 || n != memoColumns) {
+      memo.clear();
+      memoTimeline = tl;
+      memoVersion = tl.version();
+      memoT0 = box.t0S;
+      memoT1 = box.t1S;
+      memoColumns = n;
+      if (starts.length < n + 1) {
+        starts = new int[n + 1];
+      }
+      MinMaxDecimator.columnStarts(tl.timesS(), tl.size(), box.t0S, box.t1S, n, starts);
+    }
+    double[][] m = memo.get(values);
+    if (m == null) {
+      m = new double[][] {new double[n], new double[n]};
+      MinMaxDecimator.decimate(values, starts, n, m[0], m[1]);
+      memo.put(values, m);
+    }
+    System.arraycopy(m[0], 0, a, 0, n);
+    System.arraycopy(m[1], 0, b, 0, n);
+  }
+
+  /**
    * The y range that holds a trace's columns (edge units), widened by the extra values given,
    * with a 5 % margin; [NaN, NaN] when there is nothing.
    */
   double[] range(Timeline tl, double[] values, Box box, DoubleUnaryOperator edge, double... extra) {
     int n = box.columns();
     ensure(n);
-    MinMaxDecimator.decimate(tl.timesS(), values, tl.size(), box.t0S, box.t1S, n, a, b);
+    decimated(tl, values, box);
     double lo = Double.POSITIVE_INFINITY;
     double hi = Double.NEGATIVE_INFINITY;
     for (int c = 0; c < n; c++) {
@@ -159,13 +195,23 @@ final class TraceChart {
     return Math.max(1, (int) Math.floor(CONNECT_S / sPerColumn));
   }
 
-  /** One trace, min/max per column, as polylines over runs of columns without a data gap. */
+  /**
+   * One trace over runs of columns without a data gap. Where the columns hold a sample or so
+   * each, a polyline through them (min and max of each column). Where they hold many (a long
+   * window), a solid trace is drawn as its min/max envelope, one filled polygon per run (at least
+   * 1 px high), and a dashed one as a dashed line through each column's mid-range: a zigzag
+   * polyline over noisy columns would be many times longer than the plot is wide, and stroking
+   * (let alone dashing) it is what costs the rasteriser.
+   */
   void trace(GraphicsContext g, Timeline tl, double[] values, Box box, DoubleUnaryOperator edge, Color c,
       double width, boolean dashed) {
     int n = box.columns();
     ensure(n);
-    MinMaxDecimator.decimate(tl.timesS(), values, tl.size(), box.t0S, box.t1S, n, a, b);
+    decimated(tl, values, box);
+    double samplesPerColumn = samplesIn(tl, box) / (double) n;
+    boolean dense = samplesPerColumn > 1.5;
     g.setStroke(c);
+    g.setFill(c);
     g.setLineWidth(width);
     if (dashed) {
       g.setLineDashes(5, 3);
@@ -175,27 +221,75 @@ final class TraceChart {
     int maxEmpty = maxEmptyColumns(box);
     int k = 0;
     int lastFilled = -1;
-    for (int col = 0; col < n; col++) {
-      if (Double.isNaN(a[col])) {
+    int runStart = -1;
+    for (int col = 0; col <= n; col++) {
+      boolean filled = col < n && !Double.isNaN(a[col]);
+      if (col == n || (filled && lastFilled >= 0 && col - lastFilled > maxEmpty)) {
+        if (dense && !dashed) {
+          if (runStart >= 0) {
+            envelope(g, box, edge, runStart, lastFilled, width);
+          }
+        } else {
+          flush(g, k);
+        }
+        k = 0;
+        runStart = -1;
+      }
+      if (!filled) {
         continue;
       }
-      if (lastFilled >= 0 && col - lastFilled > maxEmpty) {
-        flush(g, k);
-        k = 0;
+      if (runStart < 0) {
+        runStart = col;
       }
       lastFilled = col;
+      if (dense && !dashed) {
+        continue;
+      }
       double px = box.x + col + 0.5;
       double p = clampY(box, box.py(edge.applyAsDouble(a[col])));
       double q = clampY(box, box.py(edge.applyAsDouble(b[col])));
-      xs[k] = px;
-      ys[k++] = p;
-      if (q != p) {
+      if (dense) {
         xs[k] = px;
-        ys[k++] = q;
+        ys[k++] = 0.5 * (p + q);
+      } else {
+        xs[k] = px;
+        ys[k++] = p;
+        if (q != p) {
+          xs[k] = px;
+          ys[k++] = q;
+        }
       }
     }
-    flush(g, k);
     g.setLineDashes();
+  }
+
+  /** Samples of the timeline inside the box's window. */
+  private static int samplesIn(Timeline tl, Box box) {
+    return MinMaxDecimator.firstAtOrAfter(tl.timesS(), tl.size(), box.t1S)
+        - MinMaxDecimator.firstAtOrAfter(tl.timesS(), tl.size(), box.t0S);
+  }
+
+  /** The min/max envelope of columns [from, to] as one filled polygon, at least {@code width} px high. */
+  private void envelope(GraphicsContext g, Box box, DoubleUnaryOperator edge, int from, int to, double width) {
+    int m = 0;
+    double half = 0.5 * width;
+    for (int col = from; col <= to; col++) {
+      if (!Double.isNaN(a[col])) {
+        xs[m] = box.x + col + 0.5;
+        ys[m++] = clampY(box, box.py(edge.applyAsDouble(b[col])) - half); // max is up on screen
+      }
+    }
+    int up = m;
+    for (int j = up - 1; j >= 0; j--) {
+      int col = (int) Math.floor(xs[j] - box.x);
+      xs[m] = xs[j];
+      ys[m++] = clampY(box, box.py(edge.applyAsDouble(a[col])) + half);
+    }
+    if (up == 1) {
+      g.fillRect(xs[0] - half, ys[0], width, Math.max(width, ys[1] - ys[0]));
+    } else {
+      g.fillPolygon(xs, ys, m);
+    }
   }
 
   private void flush(GraphicsContext g, int k) {
@@ -215,7 +309,8 @@ final class TraceChart {
       Color c) {
     int n = box.columns();
     ensure(n);
-    MinMaxDecimator.decimateBand(tl.timesS(), values, sd, k, tl.size(), box.t0S, box.t1S, n, a, b);
+    decimated(tl, values, box); // refreshes the shared column boundaries
+    MinMaxDecimator.decimateBand(values, sd, k, starts, n, a, b);
     g.setFill(c);
     int maxEmpty = maxEmptyColumns(box);
     int runStart = -1;

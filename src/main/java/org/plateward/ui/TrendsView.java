@@ -20,7 +20,7 @@ import org.plateward.signals.Signal;
  * output against the model's prediction, and the main inputs, over a window of 10 min to 24 h
  * that ends at the cursor. Drawn on one canvas with min/max decimation per pixel column.
  */
-final class TrendsView implements TimelineView {
+public final class TrendsView implements TimelineView {
   /** The window choices, s. */
   static final double[] RANGES_S = {600, 3600, 4 * 3600, 24 * 3600};
   private static final String[] RANGE_NAMES = {"10 min", "1 h", "4 h", "24 h"};
@@ -38,7 +38,11 @@ final class TrendsView implements TimelineView {
   private Timeline last;
   private int lastIndex = -1;
 
-  TrendsView(UnitSpec unit, AlarmSettings alarms) {
+  /**
+   * @param unit the unit (limits drawn)
+   * @param alarms alarm definitions (the peak_high limit drawn; may be null)
+   */
+  public TrendsView(UnitSpec unit, AlarmSettings alarms) {
     this.unit = unit;
     this.peakHighK = alarms == null ? Double.NaN : alarms.definition(AlarmKind.PEAK_HIGH).limit();
     HBox bar = new HBox(6);
@@ -99,6 +103,7 @@ final class TrendsView implements TimelineView {
     GraphicsContext g = canvas.canvas().getGraphicsContext2D();
     double w = canvas.canvas().getWidth();
     double h = canvas.canvas().getHeight();
+    g.clearRect(0, 0, w, h); // also drops the canvas's queued commands
     g.setFill(Palette.BACKGROUND);
     g.fillRect(0, 0, w, h);
     if (last == null || lastIndex < 0) {
@@ -111,8 +116,13 @@ final class TrendsView implements TimelineView {
 
   /**
    * Draws every trend panel for the window (t1 − range, t1]; used by the view and the benchmark.
+   *
+   * @param g where to draw (its canvas is w × h px)
+   * @param tl the frames
+   * @param t1S window end, epoch s
+   * @param range window length, s
    */
-  void draw(GraphicsContext g, double w, double h, Timeline tl, double t1S, double range) {
+  public void draw(GraphicsContext g, double w, double h, Timeline tl, double t1S, double range) {
     double t1 = t1S + 0.5;
     double t0 = t1 - range;
     int panels = 7;
