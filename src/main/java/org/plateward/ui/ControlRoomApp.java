@@ -126,6 +126,9 @@ final class ControlRoomApp {
     for (int i = 0; i < names.length; i++) {
       int k = i;
       onFx(() -> {
+        if (k == 1) {
+          w.trends().selectRange(1); // the trends over the last hour
+        }
         w.tabs().getSelectionModel().select(k);
         w.invalidate();
         w.pulseNow();

@@ -26,6 +26,8 @@ public final class Palette {
   public static final Color ESTIMATE = Color.rgb(25, 25, 25);
   /** A second trace in the same plot (model prediction, second signal). */
   public static final Color SECOND = Color.rgb(70, 85, 120);
+  /** The model's prediction, drawn wide and light under the measured trace. */
+  public static final Color MODEL = Color.rgb(160, 168, 182);
   /** Uncertainty bands (±σ, ±2σ). */
   public static final Color BAND = Color.rgb(150, 160, 175, 0.45);
   /** Limit lines. */

@@ -33,6 +33,7 @@ final class ReplayView implements TimelineView {
   private final Slider scrub = new Slider();
   private final Label time = new Label();
   private final Label note = new Label();
+  private final Label recording = new Label();
   private boolean updating;
   private Timeline last;
 
@@ -94,7 +95,7 @@ final class ReplayView implements TimelineView {
     buttons.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
     HBox.setHgrow(scrub, Priority.ALWAYS);
     time.setStyle("-fx-font-size: 14px; -fx-font-weight: bold;");
-    root.getChildren().addAll(new Label("Recording: " + feed.status().source()), buttons,
+    root.getChildren().addAll(recording, buttons,
         new Label("Scrub (drag, or Ctrl+Left / Ctrl+Right):"), scrub, time, note,
         new Label("Keyboard: Ctrl+P play/pause, Ctrl+Left/Right one minute, Ctrl+N next alarm, Ctrl+End latest estimated."
             + " Operator actions on alarms apply at the latest estimated time."));
@@ -117,6 +118,7 @@ final class ReplayView implements TimelineView {
       return;
     }
     play.setText(cursor.playing() ? "_Pause" : "_Play");
+    recording.setText("Recording: " + feed.status().source());
     if (!Double.isNaN(cursorS) && !scrub.isValueChanging()) {
       updating = true;
       scrub.setValue(cursorS);

@@ -364,11 +364,14 @@ final class TraceChart {
     g.setLineDashes(8, 4);
     g.strokeLine(box.x, py, box.x + box.w, py);
     g.setLineDashes();
-    g.setFill(Palette.MUTED);
     g.setFont(LABEL);
-    g.setTextAlign(TextAlignment.RIGHT);
+    g.setTextAlign(TextAlignment.LEFT);
     g.setTextBaseline(VPos.BOTTOM);
-    g.fillText(label, box.x + box.w - 4, py - 1);
+    double tw = label.length() * 6.2; // close enough for the 11 px label font
+    g.setFill(Palette.PLOT);
+    g.fillRect(box.x + 3, py - 14, tw + 4, 13);
+    g.setFill(Palette.MUTED);
+    g.fillText(label, box.x + 5, py - 1);
   }
 
   /** A vertical cursor line at t. */

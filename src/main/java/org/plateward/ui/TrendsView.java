@@ -171,11 +171,11 @@ public final class TrendsView implements TimelineView {
     double[] r1 = chart.range(tl, tl.signal(Signal.REF_OUTLET_TEMP), b, K_TO_C);
     double[] r2 = chart.range(tl, tl.signal(Signal.COMB_OUTLET_TEMP), b, K_TO_C);
     TraceChart.setRange(b, Math.min(r1[0], r2[0]), Math.max(r1[1], r2[1]), 10);
-    chart.frame(g, b, "Gas outlets, °C: reformed gas and flue gas, measured (solid) vs model (dashed)", false);
+    chart.frame(g, b, "Gas outlets, °C: reformed gas (black) and flue gas (blue-grey) measured, on the model's prediction (wide light line)", false);
+    chart.trace(g, tl, tl.trace(Trace.PREDICTED_REF_OUTLET_K), b, K_TO_C, Palette.MODEL, 4.0, false);
+    chart.trace(g, tl, tl.trace(Trace.PREDICTED_COMB_OUTLET_K), b, K_TO_C, Palette.MODEL, 4.0, false);
     chart.trace(g, tl, tl.signal(Signal.REF_OUTLET_TEMP), b, K_TO_C, Palette.ESTIMATE, 1.0, false);
-    chart.trace(g, tl, tl.trace(Trace.PREDICTED_REF_OUTLET_K), b, K_TO_C, Palette.ESTIMATE, 1.2, true);
     chart.trace(g, tl, tl.signal(Signal.COMB_OUTLET_TEMP), b, K_TO_C, Palette.SECOND, 1.0, false);
-    chart.trace(g, tl, tl.trace(Trace.PREDICTED_COMB_OUTLET_K), b, K_TO_C, Palette.SECOND, 1.2, true);
     y += ph + gap;
 
     // 5 plate ends, measured vs model
@@ -183,11 +183,11 @@ public final class TrendsView implements TimelineView {
     r1 = chart.range(tl, tl.signal(Signal.PLATE_END_TEMP_REF_INLET), b, K_TO_C);
     r2 = chart.range(tl, tl.signal(Signal.PLATE_END_TEMP_REF_OUTLET), b, K_TO_C);
     TraceChart.setRange(b, Math.min(r1[0], r2[0]), Math.max(r1[1], r2[1]), 10);
-    chart.frame(g, b, "Plate ends, °C: z = 0 and z = L, measured (solid) vs model (dashed)", false);
+    chart.frame(g, b, "Plate ends, °C: z = 0 (black) and z = L (blue-grey) measured, on the model's prediction (wide light line)", false);
+    chart.trace(g, tl, tl.trace(Trace.PREDICTED_PLATE_END_INLET_K), b, K_TO_C, Palette.MODEL, 4.0, false);
+    chart.trace(g, tl, tl.trace(Trace.PREDICTED_PLATE_END_OUTLET_K), b, K_TO_C, Palette.MODEL, 4.0, false);
     chart.trace(g, tl, tl.signal(Signal.PLATE_END_TEMP_REF_INLET), b, K_TO_C, Palette.ESTIMATE, 1.0, false);
-    chart.trace(g, tl, tl.trace(Trace.PREDICTED_PLATE_END_INLET_K), b, K_TO_C, Palette.ESTIMATE, 1.2, true);
     chart.trace(g, tl, tl.signal(Signal.PLATE_END_TEMP_REF_OUTLET), b, K_TO_C, Palette.SECOND, 1.0, false);
-    chart.trace(g, tl, tl.trace(Trace.PREDICTED_PLATE_END_OUTLET_K), b, K_TO_C, Palette.SECOND, 1.2, true);
     y += ph + gap;
 
     // 6 fuel flow (input)
