@@ -20,7 +20,7 @@ import picocli.CommandLine.Option;
 /**
  * {@code plateward demo}: the simulated plant (invented data) with an upset, served over OPC UA
  * on loopback, the monitor connected to it, the soft-sensor publisher, and history in a local
- * folder; a console view until the window exists.
+ * folder; the window where a display exists (the console otherwise).
  */
 @Command(
     name = "demo",

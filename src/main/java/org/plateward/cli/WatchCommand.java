@@ -18,8 +18,8 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code plateward watch}: live monitoring of the plant named in the configuration's {@code
- * [opcua]} section, with history and the soft-sensor publisher; a console view until the window
- * exists.
+ * [opcua]} section, with history and the soft-sensor publisher; the window where a display exists,
+ * the console otherwise.
  */
 @Command(
     name = "watch",
