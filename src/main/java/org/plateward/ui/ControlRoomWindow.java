@@ -31,7 +31,7 @@ public final class ControlRoomWindow {
   private static final long STATUS_NS = 250_000_000L;
 
   private final DisplayFeed feed;
-  private final SnapshotMailbox mailbox = new SnapshotMailbox(20_000);
+  private final SnapshotMailbox mailbox;
   private final Timeline timeline = new Timeline();
   private final PulseTimings timings = new PulseTimings(4096);
   private final PulseTimings cpuTimings = new PulseTimings(4096);
@@ -67,6 +67,7 @@ public final class ControlRoomWindow {
   public ControlRoomWindow(DisplayFeed feed, AlarmSettings alarmSettings) {
     this.feed = feed;
     ReplayFeed rf = feed.replay();
+    this.mailbox = new SnapshotMailbox(20_000, rf != null);
     this.cursor = rf == null ? null : new ReplayCursor(rf);
     profile = new PlateProfileView(feed.unit(), feed.cellCentresM());
     trends = new TrendsView(feed.unit(), alarmSettings);
