@@ -137,7 +137,9 @@ final class AlarmsView implements TimelineView {
     Label rLabel = new Label("_Reason:");
     rLabel.setMnemonicParsing(true);
     rLabel.setLabelFor(reason);
-    Label sLabel = new Label("shelve for");
+    Label sLabel = new Label("shelve _for");
+    sLabel.setMnemonicParsing(true);
+    sLabel.setLabelFor(shelveFor);
     HBox actions = new HBox(6, opLabel, operator, rLabel, reason, sLabel, shelveFor, ack, shelve, unshelve);
     actions.setPadding(new Insets(6, 8, 2, 8));
     actions.setAlignment(javafx.geometry.Pos.CENTER_LEFT);

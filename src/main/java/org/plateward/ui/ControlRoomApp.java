@@ -147,12 +147,6 @@ final class ControlRoomApp {
     return out;
   }
 
-  static void shutdown() {
-    if (STARTED.get()) {
-      Platform.exit();
-    }
-  }
-
   /** Runs on the FX thread and waits for the result. */
   static <T> T onFx(java.util.concurrent.Callable<T> work) {
     if (Platform.isFxApplicationThread()) {

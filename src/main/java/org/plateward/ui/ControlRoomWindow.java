@@ -156,7 +156,8 @@ public final class ControlRoomWindow {
     if (cursor != null) {
       double c = cursor.tick(wallDt, timeline);
       index = Double.isNaN(c) ? -1 : timeline.indexAt(c);
-      if (now - lastReplayNs >= STATUS_NS) {
+      // controls follow a scrub or jump at once, and a playing cursor four times a second
+      if (now - lastReplayNs >= STATUS_NS || (!cursor.playing() && index != shownIndex)) {
         replay.refresh(timeline, c);
         lastReplayNs = now;
       }

@@ -68,8 +68,12 @@ public final class WindowLauncher {
     return ControlRoomApp.screenshots(window, dir, atS, timeoutS);
   }
 
-  /** Ends the JavaFX toolkit (once, when the command is done with every window). */
+  /**
+   * Called when the command is done with every window. The toolkit is left running (the
+   * program's main ends the JVM; a toolkit once exited cannot start again in the same JVM, which
+   * commands run in-process, as in the tests, would otherwise meet).
+   */
   public static void shutdown() {
-    ControlRoomApp.shutdown();
+    // nothing to do: windows are closed by their handles
   }
 }
