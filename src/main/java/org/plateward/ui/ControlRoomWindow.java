@@ -92,7 +92,8 @@ public final class ControlRoomWindow {
     root.setCenter(tabs);
     root.setBottom(caution);
     root.setStyle("-fx-base: " + Palette.css(Palette.BACKGROUND) + "; -fx-background-color: "
-        + Palette.css(Palette.BACKGROUND) + "; -fx-font-size: 12px;");
+        + Palette.css(Palette.BACKGROUND) + "; -fx-control-inner-background: " + Palette.css(Palette.PLOT)
+        + "; -fx-font-size: 12px;");
     for (int i = 0; i < viewTimings.length; i++) {
       viewTimings[i] = new PulseTimings(2048);
     }

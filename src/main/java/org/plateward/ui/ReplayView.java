@@ -34,6 +34,8 @@ final class ReplayView implements TimelineView {
   private final Label time = new Label();
   private final Label note = new Label();
   private final Label recording = new Label();
+  private final javafx.scene.control.ListView<org.plateward.alarms.AlarmEvent> marks = new javafx.scene.control.ListView<>();
+  private int marksShown = -1;
   private boolean updating;
   private Timeline last;
 
@@ -95,10 +97,42 @@ final class ReplayView implements TimelineView {
     buttons.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
     HBox.setHgrow(scrub, Priority.ALWAYS);
     time.setStyle("-fx-font-size: 14px; -fx-font-weight: bold;");
+    marks.setId("replay-marks");
+    marks.setCellFactory(l -> new javafx.scene.control.ListCell<>() {
+      @Override
+      protected void updateItem(org.plateward.alarms.AlarmEvent e, boolean empty) {
+        super.updateItem(e, empty);
+        setGraphic(empty || e == null ? null : PriorityMark.of(e.priority()));
+        setText(empty || e == null ? null : e.time() + "  " + PriorityMark.word(e.priority()) + "  " + e.alarm().key()
+            + ": " + AlarmsView.stateWords(e.to()));
+      }
+    });
+    marks.setOnMouseClicked(e -> {
+      if (e.getClickCount() == 2) {
+        jumpToMark();
+      }
+    });
+    marks.setOnKeyPressed(e -> {
+      if (e.getCode() == javafx.scene.input.KeyCode.ENTER) {
+        jumpToMark();
+      }
+    });
+    VBox.setVgrow(marks, Priority.ALWAYS);
+    Label mLabel = new Label("Alarm annunciations and clearings estimated so far (_Enter or double-click: go there):");
+    mLabel.setMnemonicParsing(true);
+    mLabel.setLabelFor(marks);
     root.getChildren().addAll(recording, buttons,
         new Label("Scrub (drag, or Ctrl+Left / Ctrl+Right):"), scrub, time, note,
         new Label("Keyboard: Ctrl+P play/pause, Ctrl+Left/Right one minute, Ctrl+N next alarm, Ctrl+End latest estimated."
-            + " Operator actions on alarms apply at the latest estimated time."));
+            + " Operator actions on alarms apply at the latest estimated time."), mLabel, marks);
+  }
+
+  private void jumpToMark() {
+    var e = marks.getSelectionModel().getSelectedItem();
+    if (e != null) {
+      cursor.pause();
+      cursor.scrubTo(Timeline.seconds(e.time()));
+    }
   }
 
   @Override
@@ -130,6 +164,18 @@ final class ReplayView implements TimelineView {
             Timeline.instant(cursorS), (cursorS - feed.firstS()) / 60.0,
             Double.isNaN(head) ? "-" : Instant.ofEpochMilli(Math.round(head * 1000)).toString()));
     note.setText(cursor.note());
+    java.util.List<org.plateward.alarms.AlarmEvent> ev = tl.events();
+    if (ev.size() != marksShown) {
+      marksShown = ev.size();
+      java.util.List<org.plateward.alarms.AlarmEvent> m = new java.util.ArrayList<>();
+      for (var e : ev) {
+        if (e.to().annunciated() != e.from().annunciated() || e.to() == org.plateward.alarms.AlarmState.UNACKNOWLEDGED
+            && e.from() != org.plateward.alarms.AlarmState.UNACKNOWLEDGED) {
+          m.add(e);
+        }
+      }
+      marks.getItems().setAll(m);
+    }
   }
 
   @Override
