@@ -21,7 +21,7 @@ import picocli.CommandLine.Option;
 /**
  * {@code plateward demo}: the simulated plant (invented data) with an upset, served over OPC UA
  * on loopback, the monitor connected to it, the soft-sensor publisher, and history in a local
- * folder; a console view until the window exists.
+ * folder; the window where a display exists (the console otherwise).
  */
 @Command(
     name = "demo",
@@ -96,9 +96,11 @@ public final class DemoCommand implements Callable<Integer> {
     PrintWriter err = spec.commandLine().getErr();
     out.println(Advisory.SHORT);
     out.println("plateward demo: unit " + cfg.unit().name() + " (invented), scenario " + scenarioPath);
-    if (!headless) {
-      out.println("plateward demo: the window comes with a later version; running headless (console).");
+    String noWindow = headless ? "" : org.plateward.ui.WindowLauncher.displayProblem();
+    if (noWindow != null && !noWindow.isEmpty()) {
+      out.println("plateward demo: " + noWindow + "; running headless (console).");
     }
+    boolean window = noWindow == null;
     out.flush();
     DemoSession session;
     try {
@@ -112,14 +114,30 @@ public final class DemoCommand implements Callable<Integer> {
       return PlatewardCommand.EXIT_INTERNAL;
     }
     LiveRun run = new LiveRun();
-    ConsoleView view = ConsoleView.start(session.monitor(), out, refreshS);
+    org.plateward.ui.WindowHandle win = null;
+    if (window) {
+      try {
+        win = org.plateward.ui.WindowLauncher.open(new org.plateward.ui.LiveFeed(session.monitor(), cfg.unit()),
+            cfg.alarms(), "Plateward - demo, unit " + cfg.unit().name() + " (invented data, advisory)");
+        out.println("plateward demo: window open; close it to stop");
+      } catch (IllegalStateException e) {
+        out.println("plateward demo: " + e.getMessage() + "; running headless (console).");
+      }
+      out.flush();
+    }
+    org.plateward.ui.WindowHandle shown = win;
+    ConsoleView view = ConsoleView.start(session.monitor(), out, shown == null ? refreshS : Math.max(refreshS, 60));
     WatchCommand.startOperatorConsole(session.monitor(), out, operator);
     try {
-      String why = run.await(durationS, () -> session.plant().ended());
+      String why = run.await(durationS, () -> session.plant().ended() || (shown != null && shown.closed()));
       out.println("plateward demo: stopping (" + why + ")");
       out.flush();
       return 0;
     } finally {
+      if (shown != null) {
+        shown.close();
+        org.plateward.ui.WindowLauncher.shutdown();
+      }
       view.close();
       session.close();
       out.println("plateward demo: history flushed to " + dataDir.resolve("plateward.db")

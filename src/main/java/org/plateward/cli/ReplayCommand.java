@@ -67,11 +67,37 @@ public final class ReplayCommand implements Callable<Integer> {
   @Option(names = "--no-progress", description = "Do not draw the progress bar on stderr.")
   boolean noProgress;
 
+  @Option(names = "--ui", description = "Show the recording in the window, with play, pause, speed, scrub and jump to the next alarm.")
+  boolean ui;
+
+  @Option(names = "--audit-db", paramLabel = "F",
+      description = "With --ui: history file that keeps the alarm audit of the replay (operator actions included); default: not kept.")
+  Path auditDb;
+
+  @Option(names = "--screenshot", paramLabel = "DIR",
+      description = "With --ui: save one PNG per view into DIR, then close the window.")
+  Path screenshotDir;
+
+  @Option(names = "--screenshot-at", paramLabel = "D", defaultValue = "30 min",
+      description = "With --screenshot: how far into the recording to take them (default: ${DEFAULT-VALUE}).")
+  String screenshotAt;
+
   @Override
   public Integer call() throws Exception {
     if ((inputs == null) == (db == null)) {
       throw new CommandLine.ParameterException(spec.commandLine(),
           "give either --input F.csv or --db F --from T1 --to T2");
+    }
+    if (!ui && (auditDb != null || screenshotDir != null)) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--audit-db and --screenshot go with --ui");
+    }
+    if (ui) {
+      String problem = org.plateward.ui.WindowLauncher.displayProblem();
+      if (problem == null) {
+        return replayWindow();
+      }
+      spec.commandLine().getErr().println("plateward replay: --ui: " + problem + "; replaying on the console instead.");
+      spec.commandLine().getErr().flush();
     }
     if (db != null) {
       return replayHistory();
@@ -274,6 +300,69 @@ public final class ReplayCommand implements Callable<Integer> {
     }
     outText.flush();
     return 0;
+  }
+
+  /** {@code --ui}: the recording in the window, driven by the replay controls. */
+  private int replayWindow() throws Exception {
+    PlatewardConfig cfg = config.load();
+    PrintWriter err = spec.commandLine().getErr();
+    PrintWriter outText = spec.commandLine().getOut();
+    double atS = LiveRun.durationS(spec, screenshotAt);
+    org.plateward.history.HistoryRecorder audit = auditDb == null ? null
+        : org.plateward.history.HistoryRecorder.start(org.plateward.live.DemoSession.withFile(cfg.history(), auditDb));
+    org.plateward.ui.ReplayFeed feed;
+    try {
+      if (db != null) {
+        if (from == null || to == null) {
+          throw new CommandLine.ParameterException(spec.commandLine(), "--db needs --from T1 and --to T2");
+        }
+        feed = org.plateward.ui.ReplayFeed.ofHistory(cfg.unit(), cfg.alarms(), db, instant("--from", from), instant("--to", to), audit);
+      } else {
+        if (!Files.isReadable(input)) {
+          throw new ReplayFormatException(input.toString(), 0, "--input", "no such file or not readable");
+        }
+        feed = org.plateward.ui.ReplayFeed.ofFile(cfg.unit(), cfg.alarms(), input, audit);
+      }
+    } catch (RuntimeException | java.io.IOException e) {
+      if (audit != null) {
+        audit.close();
+      }
+      throw e;
+    }
+    outText.println(Advisory.SHORT);
+    outText.println("plateward replay: showing " + (input != null ? input : db) + " in the window"
+        + (audit == null ? "" : "; alarm audit kept in " + auditDb));
+    outText.flush();
+    org.plateward.ui.WindowHandle window = null;
+    try {
+      window = org.plateward.ui.WindowLauncher.open(feed, cfg.alarms(), "Plateward - replay of "
+          + (input != null ? input.getFileName() : db.getFileName()) + " (advisory)");
+      if (screenshotDir != null) {
+        for (Path p : org.plateward.ui.WindowLauncher.screenshots(window, screenshotDir, feed.firstS() + atS, 120)) {
+          outText.println("screenshot: " + p);
+        }
+        outText.flush();
+      } else {
+        while (!window.closed()) {
+          Thread.sleep(200);
+        }
+      }
+      return 0;
+    } catch (IllegalStateException e) {
+      err.println("plateward replay: " + e.getMessage());
+      err.flush();
+      return PlatewardCommand.EXIT_INTERNAL;
+    } finally {
+      if (window != null) {
+        window.close();
+      }
+      feed.close();
+      if (audit != null) {
+        audit.flush(java.time.Duration.ofSeconds(10));
+        audit.close();
+      }
+      org.plateward.ui.WindowLauncher.shutdown();
+    }
   }
 
   private Instant instant(String option, String text) {

@@ -19,8 +19,8 @@ import picocli.CommandLine.Option;
 
 /**
  * {@code plateward watch}: live monitoring of the plant named in the configuration's {@code
- * [opcua]} section, with history and the soft-sensor publisher; a console view until the window
- * exists.
+ * [opcua]} section, with history and the soft-sensor publisher; the window where a display exists,
+ * the console otherwise.
  */
 @Command(
     name = "watch",
@@ -69,14 +69,16 @@ public final class WatchCommand implements Callable<Integer> {
       throw new CommandLine.ParameterException(spec.commandLine(), "--refresh: must be positive, got " + refreshS);
     }
     out.println(Advisory.SHORT);
-    if (!headless) {
-      out.println("plateward watch: the window comes with a later version; running headless (console).");
+    String noWindow = headless ? "" : org.plateward.ui.WindowLauncher.displayProblem();
+    if (noWindow != null && !noWindow.isEmpty()) {
+      out.println("plateward watch: " + noWindow + "; running headless (console).");
     }
     out.flush();
     HistoryRecorder history = HistoryRecorder.start(cfg.history());
     EstimatePublisher publisher = null;
     LiveMonitor monitor = null;
     ConsoleView view = null;
+    org.plateward.ui.WindowHandle win = null;
     LiveRun run = new LiveRun();
     try {
       out.println("history: " + cfg.history().databaseFile().toAbsolutePath()
@@ -100,13 +102,28 @@ public final class WatchCommand implements Callable<Integer> {
         err.println("plateward watch: " + e.getMessage());
         return PlatewardCommand.EXIT_INTERNAL;
       }
-      view = ConsoleView.start(monitor, out, refreshS);
+      if (noWindow == null) {
+        try {
+          win = org.plateward.ui.WindowLauncher.open(new org.plateward.ui.LiveFeed(monitor, cfg.unit()), cfg.alarms(),
+              "Plateward - watching " + cfg.unit().name() + " (advisory)");
+          out.println("plateward watch: window open; close it to stop");
+        } catch (IllegalStateException e) {
+          out.println("plateward watch: " + e.getMessage() + "; running headless (console).");
+        }
+        out.flush();
+      }
+      org.plateward.ui.WindowHandle shown = win;
+      view = ConsoleView.start(monitor, out, shown == null ? refreshS : Math.max(refreshS, 60));
       startOperatorConsole(monitor, out, operator);
-      String why = run.await(durationS, () -> false);
+      String why = run.await(durationS, () -> shown != null && shown.closed());
       out.println("plateward watch: stopping (" + why + ")");
       out.flush();
       return 0;
     } finally {
+      if (win != null) {
+        win.close();
+        org.plateward.ui.WindowLauncher.shutdown();
+      }
       if (view != null) {
         view.close();
       }

@@ -128,6 +128,7 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
   private final ThreadPoolExecutor estimator;
   private final List<Consumer<String>> changeListeners = new CopyOnWriteArrayList<>();
   private final List<Consumer<Estimate>> estimateListeners = new CopyOnWriteArrayList<>();
+  private final List<java.util.function.BiConsumer<Frame, Estimate>> frameListeners = new CopyOnWriteArrayList<>();
   private final AtomicLong dropped = new AtomicLong();
   private final AtomicLong frames = new AtomicLong();
   private final String runId = UUID.randomUUID().toString();
@@ -238,6 +239,62 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
     estimateListeners.add(l);
   }
 
+  /**
+   * Receives every frame (plant time) with its estimate, on the estimator thread, after the
+   * alarms were judged and the advisor asked; keep it short. Inside the call the estimator may be
+   * read ({@link #sensor()}), since it is the estimator's own thread.
+   */
+  public void addFrameListener(java.util.function.BiConsumer<Frame, Estimate> l) {
+    frameListeners.add(l);
+  }
+
+  /**
+   * Takes one operator action on an advisory alarm, on the estimator thread (the alarm board's
+   * owner), timed at plant time now; the board writes the audit trail (history, when kept).
+   *
+   * @param action what to do
+   * @param who the operator
+   * @param alarm the alarm
+   * @param reason reason or comment (required for shelve and removal from service)
+   * @param shelveFor how long a shelve lasts from the action time (null for other actions)
+   * @return the board's answer; refused with a message when no alarms are judged, completed
+   *     exceptionally when the monitor is closed
+   */
+  public java.util.concurrent.CompletableFuture<org.plateward.alarms.ActionResult> alarmAction(
+      org.plateward.alarms.ActionKind action, String who, AlarmKind alarm, String reason,
+      java.time.Duration shelveFor) {
+    java.util.concurrent.CompletableFuture<org.plateward.alarms.ActionResult> f =
+        new java.util.concurrent.CompletableFuture<>();
+    if (alarms == null) {
+      f.completeExceptionally(new IllegalStateException("no advisory alarms are judged (no [alarms] configuration)"));
+      return f;
+    }
+    try {
+      estimator.execute(() -> {
+        try {
+          Instant now = clock.toPlant(Instant.now());
+          org.plateward.alarms.ActionResult r = switch (action) {
+            case ACKNOWLEDGE -> alarms.acknowledge(now, who, alarm, reason);
+            case SHELVE -> alarms.shelve(now, who, alarm, reason, shelveFor == null ? null : now.plus(shelveFor));
+            case UNSHELVE -> alarms.unshelve(now, who, alarm, reason);
+            case REMOVE_FROM_SERVICE -> alarms.removeFromService(now, who, alarm, reason);
+            case RETURN_TO_SERVICE -> alarms.returnToService(now, who, alarm, reason);
+          };
+          alarmStatuses = alarms.statuses();
+          if (r.accepted()) {
+            tell("operator " + r.message());
+          }
+          f.complete(r);
+        } catch (RuntimeException ex) {
+          f.completeExceptionally(ex);
+        }
+      });
+    } catch (java.util.concurrent.RejectedExecutionException ex) {
+      f.completeExceptionally(new IllegalStateException("the monitor is closed or its estimator is behind", ex));
+    }
+    return f;
+  }
+
   /** A consistent look at the monitor now. */
   public MonitorStatus status() {
     Instant now = Instant.now();
@@ -334,6 +391,9 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
       }
       for (Consumer<Estimate> l : estimateListeners) {
         l.accept(e);
+      }
+      for (java.util.function.BiConsumer<Frame, Estimate> l : frameListeners) {
+        l.accept(frame, e);
       }
       noticeChanges(e, h);
     } catch (RuntimeException ex) {

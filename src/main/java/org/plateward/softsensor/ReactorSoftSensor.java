@@ -99,6 +99,7 @@ public final class ReactorSoftSensor {
   private final List<DriftAlarm> driftFlags = new ArrayList<>();
   private final BiasRateMonitor[] biasMonitors = new BiasRateMonitor[2];
   private long repairsSeen;
+  private ChannelStatus[] lastFastStatus;
   private double lastNis = Double.NaN;
   private int lastNisDof;
   private String blockReason = "";
@@ -217,6 +218,15 @@ public final class ReactorSoftSensor {
    */
   public List<DriftAlarm> driftFlags() {
     return List.copyOf(driftFlags);
+  }
+
+  /**
+   * What the last filter step did with each frame-rate channel (0 reformed gas outlet, 1 flue
+   * gas outlet, 2 plate end z = 0, 3 plate end z = L): used, missing or gated (copy); null
+   * before the first step.
+   */
+  public ChannelStatus[] lastFastChannelStatus() {
+    return lastFastStatus == null ? null : lastFastStatus.clone();
   }
 
   /** Whether frame-rate channel k (0 reformed gas outlet .. 3 plate end z = L) was excluded. */
@@ -479,6 +489,7 @@ public final class ReactorSoftSensor {
     lastNis = res.nis();
     lastNisDof = res.usedCount();
     ChannelStatus[] cs = res.channelStatus();
+    lastFastStatus = cs.clone();
     for (int k = 0; k < 4; k++) {
       if (cs[k] == ChannelStatus.GATED_SINGLE || cs[k] == ChannelStatus.GATED_JOINT) {
         status = status.worst(EstimatorStatus.DEGRADED);

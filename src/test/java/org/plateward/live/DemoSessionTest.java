@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.CopyOnWriteArrayList;
+import java.util.concurrent.TimeUnit;
 import java.util.function.BooleanSupplier;
 import org.eclipse.milo.opcua.sdk.client.OpcUaClient;
 import org.eclipse.milo.opcua.stack.core.types.builtin.DataValue;
@@ -159,6 +160,34 @@ class DemoSessionTest {
 
   @Test
   @Order(2)
+  void operatorActionsGoThroughTheBoardOnTheEstimatorThreadAndAreAudited() throws Exception {
+    java.util.List<org.plateward.signals.Frame> frames = new CopyOnWriteArrayList<>();
+    session.monitor().addFrameListener((f, e) -> frames.add(f));
+    waitFor(() -> frames.size() >= 3, "frames at the frame listener");
+    assertThat(frames.get(0).time()).isAfterOrEqualTo(scenario.start());
+    var refused = session.monitor().alarmAction(org.plateward.alarms.ActionKind.SHELVE, "shift-a",
+        org.plateward.alarms.AlarmKind.MELT_HIGH, null, Duration.ofMinutes(10)).get(10, TimeUnit.SECONDS);
+    assertThat(refused.accepted()).isFalse();
+    assertThat(refused.message()).contains("needs a reason");
+    var out = session.monitor().alarmAction(org.plateward.alarms.ActionKind.REMOVE_FROM_SERVICE, "shift-a",
+        org.plateward.alarms.AlarmKind.HISTORY_NOT_KEPT, "disk swap", null).get(10, TimeUnit.SECONDS);
+    assertThat(out.accepted()).as(out.message()).isTrue();
+    waitFor(() -> session.monitor().status().alarms().stream().anyMatch(a ->
+        a.kind() == org.plateward.alarms.AlarmKind.HISTORY_NOT_KEPT
+            && a.state() == org.plateward.alarms.AlarmState.OUT_OF_SERVICE), "the alarm out of service");
+    var back = session.monitor().alarmAction(org.plateward.alarms.ActionKind.RETURN_TO_SERVICE, "shift-a",
+        org.plateward.alarms.AlarmKind.HISTORY_NOT_KEPT, null, null).get(10, TimeUnit.SECONDS);
+    assertThat(back.accepted()).as(back.message()).isTrue();
+    session.history().flush(Duration.ofSeconds(10));
+    try (HistoryReader r = HistoryReader.open(dataDir.resolve("plateward.db"))) {
+      var acts = r.operatorActions(scenario.start(), scenario.start().plusSeconds(7200));
+      assertThat(acts).extracting(a -> a.action() + " " + a.alarmId() + " " + a.who())
+          .contains("remove_from_service history_not_kept shift-a", "return_to_service history_not_kept shift-a");
+    }
+  }
+
+  @Test
+  @Order(3)
   void aPlantServerRestartIsAGapAndTheEstimatorContinuesWithoutReset() throws Exception {
     LiveMonitor m = session.monitor();
     ReactorSoftSensor sensor = m.sensor();
@@ -207,7 +236,7 @@ class DemoSessionTest {
   }
 
   @Test
-  @Order(3)
+  @Order(4)
   void replayFromHistoryRunsTheStoredPeriodThroughTheEstimator() throws Exception {
     session.close();
     long stored;

@@ -82,7 +82,7 @@ class LiveFaultTest {
     Path data = dir.resolve("demo-data");
     Cli c = Cli.run("demo", "--duration", "6 s", "--speed", "20", "--refresh", "2", "--data-dir", data.toString());
     assertThat(c.exit()).as(c.err()).isZero();
-    assertThat(c.out()).contains(Advisory.SHORT).contains("the window comes with a later version")
+    assertThat(c.out()).contains(Advisory.SHORT).contains("window open; close it to stop")
         .contains("serving opc.tcp://127.0.0.1:").contains("soft-sensor values: opc.tcp://127.0.0.1:")
         .contains("== TM-PR1").contains("(simulated plant time, 20 x real time)")
         .contains("stopping (duration reached)").contains("history flushed to " + data.resolve("plateward.db"));
