@@ -307,6 +307,10 @@ public final class ReplayCommand implements Callable<Integer> {
     PlatewardConfig cfg = config.load();
     PrintWriter err = spec.commandLine().getErr();
     PrintWriter outText = spec.commandLine().getOut();
+    if (inputs != null && inputs.size() > 1) {
+      throw new CommandLine.ParameterException(spec.commandLine(), "--ui shows one recording: give one --input");
+    }
+    Path input = inputs == null ? null : Path.of(inputs.get(0));
     double atS = LiveRun.durationS(spec, screenshotAt);
     org.plateward.history.HistoryRecorder audit = auditDb == null ? null
         : org.plateward.history.HistoryRecorder.start(org.plateward.live.DemoSession.withFile(cfg.history(), auditDb));
