@@ -85,15 +85,28 @@ public record PosteriorBelief(double[] mean, double[][] covariance, int cells, d
     return plateAt(mean);
   }
 
+  /** Range a sigma point's cell may take around the mean profile (K of enthalpy coordinate). */
+  static final double CELL_MARGIN_BELOW_K = 200.0;
+  static final double CELL_MARGIN_ABOVE_K = 400.0;
+
   /**
    * The plate at a point z of this space: e_j = C z_j; each parameter held at or above
    * {@value #PARAMETER_FLOOR} of its mean (a sigma point far out in a wide parameter spread
    * must not give a negative activity or heat loss).
    */
   public PosteriorPlate plateAt(double[] z) {
+    // a sigma point far out along a wide direction must not leave the physical range: each
+    // cell is kept within [coldest mean cell − 200 K, hottest mean cell + 400 K] of enthalpy
+    // coordinate (the upper margin holds a full melt, about 130 K of sensible heat, and more)
+    double lo = Double.POSITIVE_INFINITY;
+    double hi = Double.NEGATIVE_INFINITY;
+    for (int j = 0; j < cells; j++) {
+      lo = Math.min(lo, mean[j]);
+      hi = Math.max(hi, mean[j]);
+    }
     double[] e = new double[cells];
     for (int j = 0; j < cells; j++) {
-      e[j] = z[j] * capacityJPerM2K;
+      e[j] = Math.max(lo - CELL_MARGIN_BELOW_K, Math.min(hi + CELL_MARGIN_ABOVE_K, z[j])) * capacityJPerM2K;
     }
     return new PosteriorPlate(e, new ModelParameters(floor(z, cells), floor(z, cells + 1), floor(z, cells + 2),
         floor(z, cells + 3)));
