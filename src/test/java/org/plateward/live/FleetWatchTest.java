@@ -137,6 +137,31 @@ class FleetWatchTest {
       }
       checkHistory(dir.resolve("data").resolve("tm-pr2.db"), "tm-pr2", surge.start());
       checkHistory(dir.resolve("data").resolve("tm-pr3.db"), "tm-pr3", surge.start());
+
+      // the command line on the same fleet file, plant A still down: its unit is shown as
+      // "connection lost" from the start, the other unit is watched
+      Path cliData = dir.resolve("cli-data");
+      Cli c = Cli.run("watch", "--headless", "--duration", "4 s", "--refresh", "1", "--publish-port", "0",
+          "--data-dir", cliData.toString(), "-c", dir.resolve("fleet.toml").toString());
+      assertThat(c.exit()).as(c.err()).isZero();
+      assertThat(c.out()).startsWith(Advisory.SHORT).contains("2 units: tm-pr2, tm-pr3");
+      List<String> last2 = c.out().lines().filter(l -> l.startsWith("tm-pr")).toList();
+      assertThat(last2.size()).isGreaterThanOrEqualTo(4); // at least two tables of two lines
+      String a = last2.get(last2.size() - 2);
+      String b = last2.get(last2.size() - 1);
+      assertThat(a).startsWith("tm-pr2").contains("connection lost").contains("waiting");
+      assertThat(b).startsWith("tm-pr3").contains("connected").doesNotContain("lost");
+      assertThat(cliData.resolve("tm-pr2.db")).exists();
+      try (HistoryReader r = HistoryReader.open(cliData.resolve("tm-pr3.db"))) {
+        Instant now = Instant.now();
+        List<EstimateRow> rows = r.estimates(now.minusSeconds(600), now.plusSeconds(600));
+        // real time, frame_period = "1 s": one estimate per wall second, in order
+        assertThat(rows.size()).isGreaterThanOrEqualTo(2);
+        for (int i = 1; i < rows.size(); i++) {
+          assertThat(Duration.between(rows.get(i - 1).time(), rows.get(i).time()).toMillis()).isEqualTo(1000);
+        }
+        assertThat(r.runs()).extracting(x -> x.source()).containsExactly(SourceKind.LIVE);
+      }
     } finally {
       if (fleet != null) {
         fleet.close();
