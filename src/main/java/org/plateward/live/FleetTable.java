@@ -15,7 +15,7 @@ import org.plateward.softsensor.Estimate;
  * advisory caution.
  */
 public final class FleetTable {
-  private static final String ROW = "%-12s %-16s %9s  %-22s %8s  %-14s %7s%n";
+  private static final String ROW = "%-12s %-16s %9s  %-22s %13s  %-14s %7s%n";
 
   private FleetTable() {}
 
@@ -33,7 +33,7 @@ public final class FleetTable {
     b.append(String.format(Locale.ROOT, "fleet of %d units at %s%n", units.size(),
         plantNow.truncatedTo(ChronoUnit.SECONDS)));
     b.append(String.format(Locale.ROOT, ROW, "unit", "link", "data age", "hidden peak (1 sigma)",
-        "max melt", "estimator", "dropped"));
+        "max-cell melt", "estimator", "dropped"));
     for (FleetMonitor.UnitStatus u : units) {
       b.append(String.format(Locale.ROOT, ROW, u.unitId(), linkWord(u),
           Double.isNaN(u.dataAgeS()) ? "-" : String.format(Locale.ROOT, "%.1f s", u.dataAgeS()),
