@@ -35,4 +35,18 @@ public final class ConfigOption {
     }
     return PlatewardConfig.load(file);
   }
+
+  /**
+   * Loads the configuration as a fleet: a file with {@code [[units]]} and every file it names,
+   * or an ordinary single-unit file as a fleet of one.
+   *
+   * @throws InvalidConfigException with every problem, in whichever file it is
+   */
+  public org.plateward.config.FleetConfig loadFleet() throws InvalidConfigException {
+    if (file.equals(PlatewardConfig.DEFAULT_FILE) && !Files.exists(file)) {
+      throw new InvalidConfigException(List.of(new ConfigError(file, 0, null,
+          "no such file (the default: run from the folder that holds config/, or give -c FILE)")));
+    }
+    return org.plateward.config.FleetConfig.load(file);
+  }
 }

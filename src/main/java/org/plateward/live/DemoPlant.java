@@ -32,10 +32,10 @@ public final class DemoPlant implements AutoCloseable {
   private volatile boolean running = true;
   private volatile long served;
 
-  private DemoPlant(SimulatedPlant plant, PlantEndpoint endpoint) {
+  private DemoPlant(SimulatedPlant plant, PlantEndpoint endpoint, PlantEndpointConfig config) {
     this.plant = plant;
     this.endpoint = endpoint;
-    this.endpointConfig = PlantEndpointConfig.defaults().withPort(endpoint.port());
+    this.endpointConfig = config.withPort(endpoint.port());
     this.url = endpoint.endpointUrl();
     this.thread = new Thread(this::run, "plateward-demo-plant");
     this.thread.setDaemon(true);
@@ -48,8 +48,21 @@ public final class DemoPlant implements AutoCloseable {
    * @param plant the plant at its first frame (initial steady state solved)
    */
   public static DemoPlant serve(SimulatedPlant plant) {
-    PlantEndpoint ep = PlantEndpoint.start(PlantEndpointConfig.defaults().withPort(0));
-    return new DemoPlant(plant, ep);
+    return serve(plant, PlantEndpointConfig.defaults().skid());
+  }
+
+  /**
+   * Serves the plant on a free loopback port under {@code Objects/<skid>} (several simulated
+   * skids side by side, each on its own endpoint).
+   *
+   * @param plant the plant at its first frame (initial steady state solved)
+   * @param skid browse name of the skid object: letters, digits, '-' and '_'
+   */
+  public static DemoPlant serve(SimulatedPlant plant, String skid) {
+    PlantEndpointConfig c = PlantEndpointConfig.defaults();
+    c = new PlantEndpointConfig(c.host(), 0, c.path(), skid, c.namespaceUri());
+    PlantEndpoint ep = PlantEndpoint.start(c);
+    return new DemoPlant(plant, ep, c);
   }
 
   /**
