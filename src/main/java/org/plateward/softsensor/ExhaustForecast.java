@@ -27,6 +27,10 @@ public final class ExhaustForecast {
   private static final double FINE_STEP_S = 10.0;
   private static final double COARSE_STEP_S = 30.0;
   private static final double FINE_SPAN_S = 600.0;
+  /** Largest change of any cell in one step, K of sensible heat (a full melt is about 130): a guard against runaway, not an accuracy control. */
+  static final double MAX_STEP_K = 100.0;
+  private static final double MIN_STEP_S = 0.5;
+  private double lastStepS;
 
   private final PlateReactorModel model;
   private final ModelEvaluation ev;
@@ -118,11 +122,9 @@ public final class ExhaustForecast {
     while (t < horizonS) {
       boolean isFine = t < FINE_SPAN_S;
       double h = isFine ? FINE_STEP_S : COARSE_STEP_S;
-      model.evaluate(e, u, p, ev);
-      for (int j = 0; j < n; j++) {
-        rhs.setEntry(j, h * ev.enthalpyRateWPerM2(j));
-      }
-      double[] d = solver(e, h).solve(rhs).toArray();
+      h = Math.min(h, horizonS - t);
+      double[] d = step(e, u, p, h, rhs);
+      h = lastStepS;
       double best = Double.POSITIVE_INFINITY;
       int cell = -1;
       for (int j = 0; j < n; j++) {
@@ -180,11 +182,8 @@ public final class ExhaustForecast {
     ArrayRealVector rhs = new ArrayRealVector(n);
     while (t < horizonS - 1e-9) {
       double h = Math.min(t < FINE_SPAN_S ? FINE_STEP_S : COARSE_STEP_S, horizonS - t);
-      model.evaluate(e, u, p, ev);
-      for (int j = 0; j < n; j++) {
-        rhs.setEntry(j, h * ev.enthalpyRateWPerM2(j));
-      }
-      double[] d = solver(e, h).solve(rhs).toArray(); // (I - hJ) d = h f(e)
+      double[] d = step(e, u, p, h, rhs); // (I - hJ) d = h f(e)
+      h = lastStepS;
       for (int j = 0; j < n; j++) {
         e[j] += d[j];
       }
@@ -192,6 +191,32 @@ public final class ExhaustForecast {
       observer.after(t, e);
     }
     return e;
+  }
+
+  /**
+   * One linearly implicit step (I − hJ) d = h f(e), halved until no cell moves by more than
+   * {@link #MAX_STEP_K} of sensible heat: far from the state its Jacobian was taken at (a
+   * sigma point, a large trim) the held J can be poor and a full step runs away. The step
+   * taken is left in {@link #lastStepS}.
+   */
+  private double[] step(double[] e, OperatingPoint u, ModelParameters p, double h, ArrayRealVector rhs) {
+    model.evaluate(e, u, p, ev);
+    double limit = MAX_STEP_K * model.plate().sensibleJPerM2K();
+    while (true) {
+      for (int j = 0; j < n; j++) {
+        rhs.setEntry(j, h * ev.enthalpyRateWPerM2(j));
+      }
+      double[] d = solver(e, h).solve(rhs).toArray();
+      double big = 0.0;
+      for (double dj : d) {
+        big = Math.max(big, Math.abs(dj));
+      }
+      if (!(big > limit) || h <= MIN_STEP_S) {
+        lastStepS = h;
+        return d;
+      }
+      h *= 0.5;
+    }
   }
 
   /** Cell that melted through first in the last forecast (−1 if none). */
