@@ -845,6 +845,14 @@ public final class ReactorSoftSensor {
     double[] u = lastGoodInputOrBlock();
     OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, u));
     double mean = forecast.secondsToExhaust(enthalpies(x, null, 0), op, dynamics.parameters(x), settings.horizonS());
+    if (!Double.isFinite(mean)) {
+      // no melt-through within the horizon: none is reported, so no spread either (the pair
+      // of spread forecasts would cost two more full-horizon marches for nothing)
+      tteS = mean;
+      tteAtS = tS;
+      tteSdS = Double.NaN;
+      return;
+    }
     int k = forecast.lastCell() >= 0 ? forecast.lastCell() : pk.cell();
     double sdK = Math.sqrt(Math.max(p[k][k], 1e-12));
     double[] v = new double[n];
