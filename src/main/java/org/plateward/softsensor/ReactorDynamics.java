@@ -237,7 +237,7 @@ public final class ReactorDynamics implements Dynamics {
     }
     correctInto(x, u, uEff);
     for (int i = 0; i < 8; i++) {
-      boolean temp = i == 2 || i == 6;
+      boolean temp = StateLayout.temperatureInput(i);
       double d = Math.abs(uEff[i] - refU[i]);
       if (temp ? d > 5.0 : d > 0.02 * Math.abs(refU[i])) {
         return true;
@@ -384,7 +384,7 @@ public final class ReactorDynamics implements Dynamics {
     double[] f1 = new double[n];
     for (int q = 0; q < inputs.length; q++) {
       int i = inputs[q];
-      double step = (i == 2 || i == 6) ? 0.1 : 1e-3 * Math.abs(u[i]);
+      double step = StateLayout.temperatureInput(i) ? 0.1 : 1e-3 * Math.abs(u[i]);
       uu[i] = u[i] + step;
       evaluateModel(x, uu, scratch);
       fillDerivative(x, scratch, f1);

@@ -391,7 +391,7 @@ public final class ReactorSoftSensor {
     double[][] b = dynamics.inputJacobian(x, u, in);
     for (int a = 0; a < in.length; a++) {
       int i = in[a];
-      double sd = (i == 2 || i == 6) ? settings.inputTempNoiseK() : settings.inputNoiseRelative() * Math.abs(u[i]);
+      double sd = StateLayout.temperatureInput(i) ? settings.inputTempNoiseK() : settings.inputNoiseRelative() * Math.abs(u[i]);
       // white meter noise sampled at 1 s: σ²·1 s (the systematic part is a state of its own)
       double density = sd * sd * 1.0;
       for (int r = 0; r < cells; r++) {
@@ -841,10 +841,11 @@ public final class ReactorSoftSensor {
     for (int i = 0; i < cells; i++) {
       System.arraycopy(jac[i], 0, jc[i], 0, cells);
     }
-    forecast.setJacobian(jc, enthalpies(x, null, 0));
-    double[] u = lastGoodInputOrBlock();
+    double[] e0 = enthalpies(x);
+    forecast.setJacobian(jc, e0);
+    double[] u = lastGoodInput.clone();
     OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, u));
-    double mean = forecast.secondsToExhaust(enthalpies(x, null, 0), op, dynamics.parameters(x), settings.horizonS());
+    double mean = forecast.secondsToExhaust(e0, op, dynamics.parameters(x), settings.horizonS());
     if (!Double.isFinite(mean)) {
       // no melt-through within the horizon: none is reported, so no spread either (the pair
       // of spread forecasts would cost two more full-horizon marches for nothing)
@@ -865,15 +866,13 @@ public final class ReactorSoftSensor {
       xp[i] += v[i];
       xm[i] -= v[i];
     }
-    double tp = forecast.secondsToExhaust(enthalpies(xp, null, 0),
+    double tp = forecast.secondsToExhaust(enthalpies(xp),
         ReactorDynamics.operatingPoint(dynamics.correctedInputs(xp, u)), dynamics.parameters(xp), settings.horizonS());
-    double tm = forecast.secondsToExhaust(enthalpies(xm, null, 0),
+    double tm = forecast.secondsToExhaust(enthalpies(xm),
         ReactorDynamics.operatingPoint(dynamics.correctedInputs(xm, u)), dynamics.parameters(xm), settings.horizonS());
     tteS = mean;
     tteAtS = tS;
-    if (!Double.isFinite(mean)) {
-      tteSdS = Double.NaN;
-    } else if (Double.isFinite(tp) && Double.isFinite(tm)) {
+    if (Double.isFinite(tp) && Double.isFinite(tm)) {
       tteSdS = 0.5 * Math.abs(tm - tp);
     } else {
       double other = Double.isFinite(tp) ? tp : tm;
@@ -886,15 +885,11 @@ public final class ReactorSoftSensor {
    * corrected by the estimated systematic meter errors (SI).
    */
   public OperatingPoint heldInputs() {
-    double[] u = lastGoodInputOrBlock();
+    double[] u = lastGoodInput.clone();
     return ReactorDynamics.operatingPoint(ekf == null ? u : dynamics.correctedInputs(ekf.state(), u));
   }
 
-  private double[] lastGoodInputOrBlock() {
-    return lastGoodInput.clone();
-  }
-
-  private double[] enthalpies(double[] x, double[] dir, double scale) {
+  private double[] enthalpies(double[] x) {
     double[] e = new double[cells];
     for (int j = 0; j < cells; j++) {
       e[j] = x[j] * capacity;
