@@ -320,12 +320,12 @@ public final class ReplayCommand implements Callable<Integer> {
         if (from == null || to == null) {
           throw new CommandLine.ParameterException(spec.commandLine(), "--db needs --from T1 and --to T2");
         }
-        feed = org.plateward.ui.ReplayFeed.ofHistory(cfg.unit(), cfg.alarms(), db, instant("--from", from), instant("--to", to), audit);
+        feed = org.plateward.ui.ReplayFeed.ofHistory(cfg.unit(), cfg.alarms(), cfg.advisor(), db, instant("--from", from), instant("--to", to), audit);
       } else {
         if (!Files.isReadable(input)) {
           throw new ReplayFormatException(input.toString(), 0, "--input", "no such file or not readable");
         }
-        feed = org.plateward.ui.ReplayFeed.ofFile(cfg.unit(), cfg.alarms(), input, audit);
+        feed = org.plateward.ui.ReplayFeed.ofFile(cfg.unit(), cfg.alarms(), cfg.advisor(), input, audit);
       }
     } catch (RuntimeException | java.io.IOException e) {
       if (audit != null) {

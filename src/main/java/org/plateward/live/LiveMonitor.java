@@ -1,10 +1,5 @@
 package org.plateward.live;
 
-import java.util.Optional;
-import java.util.Set;
-import java.util.TreeSet;
-import org.plateward.advisor.FuelTrimAdvisor;
-import org.plateward.advisor.PosteriorBelief;
 import org.plateward.advisor.TrimVerdict;
 import org.plateward.alarms.ActionKind;
 import org.plateward.alarms.ActionResult;
@@ -19,13 +14,11 @@ import org.plateward.alarms.AlarmAudit;
 import org.plateward.alarms.AlarmKind;
 import org.plateward.alarms.AlarmBoard;
 import org.plateward.alarms.AlarmEvent;
-import org.plateward.alarms.AlarmInputs;
+import org.plateward.alarms.BadOrStale;
 import org.plateward.alarms.AlarmSettings;
 import org.plateward.alarms.AlarmState;
 import org.plateward.alarms.AlarmStatus;
 import org.plateward.alarms.HistoryAlarmAudit;
-import org.plateward.reactor.PlateReactorModel;
-import org.plateward.signals.Quality;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
@@ -120,10 +113,9 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
   private volatile TimeScale clock;
   private final String unitName;
   private final ReactorSoftSensor sensor;
+  private final AdvisoryStage stage;
   private final AlarmBoard alarms;
-  private final FuelTrimAdvisor advisor;
   private volatile TrimSuggestion advice;
-  private double adviceAtS = Double.NEGATIVE_INFINITY;
   private volatile List<AlarmStatus> alarmStatuses = List.of();
   private final ThreadPoolExecutor estimator;
   private final List<Consumer<String>> changeListeners = new CopyOnWriteArrayList<>();
@@ -149,14 +141,9 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
     this.clock = setup.clock();
     this.unitName = publishedName(setup.unit().name());
     this.sensor = new ReactorSoftSensor(setup.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
-    this.alarms = setup.alarms() == null ? null : new AlarmBoard(setup.alarms(),
+    this.stage = new AdvisoryStage(setup.unit(), sensor, setup.alarms(), setup.advisor(),
         setup.history() == null ? AlarmAudit.NONE : new HistoryAlarmAudit(setup.history()));
-    // the fuel-trim advisor keeps the forecast peak below its limit ([advisor] peak_limit,
-    // by default the peak_high alarm limit)
-    TrimSettings ts = setup.advisor() != null ? setup.advisor() : setup.alarms() == null ? null
-        : TrimSettings.defaults(setup.alarms().definition(AlarmKind.PEAK_HIGH).limit());
-    this.advisor = ts == null ? null : new FuelTrimAdvisor(
-        new PlateReactorModel(setup.unit(), sensor.model().grid(), PlateReactorModel.Options.DEFAULT), ts);
+    this.alarms = stage.board();
     this.estimator =
         new ThreadPoolExecutor(1, 1, 0L, TimeUnit.MILLISECONDS, new ArrayBlockingQueue<>(BACKLOG),
             r -> {
@@ -401,48 +388,16 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
     }
   }
 
-  /**
-   * Asks the fuel-trim advisor at most every {@code forecast_every} of plant time (each question
-   * is a few sigma-point forecasts from the whole posterior); while the estimate is
-   * untrustworthy the advisor holds back and says why. A new suggestion is told to the
-   * listeners and stored in history.
-   */
+  /** Asks the advisor through the stage; a new suggestion is told and stored in history. */
   private void advise(Estimate e) {
-    double tS = e.time().getEpochSecond() + e.time().getNano() * 1e-9;
-    if (advisor == null || tS - adviceAtS < advisor.settings().forecastEveryS()) {
-      return;
-    }
-    adviceAtS = tS;
-    try {
-      Optional<TrimSuggestion> s;
-      if (e.status() == EstimatorStatus.UNTRUSTWORTHY || !Double.isFinite(e.peakPlateTempK())) {
-        s = advisor.holdBack(tS, e.reason() == null || e.reason().isBlank() ? e.status().text() : e.reason());
-      } else {
-        s = advisor.consider(tS, PosteriorBelief.of(sensor), sensor.heldInputs());
+    stage.advise(e, sensor).ifPresent(sug -> {
+      advice = sug;
+      tell("advisor " + sug.message().lines().findFirst().orElse(""));
+      HistoryRecorder h = setup.history();
+      if (h != null) {
+        h.appendSuggestion(AdvisoryStage.suggestionRow(sug, e.time()));
       }
-      s.ifPresent(sug -> {
-        advice = sug;
-        tell("advisor " + sug.message().lines().findFirst().orElse(""));
-        HistoryRecorder h = setup.history();
-        if (h != null) {
-          h.appendSuggestion(suggestionRow(sug, e.time()));
-        }
-      });
-    } catch (RuntimeException ex) {
-      LOGGER.warn("fuel-trim advice at {} failed: {}", e.time(), ex.toString());
-    }
-  }
-
-  /** What history keeps of a suggestion made at {@code time}. */
-  static SuggestionRow suggestionRow(TrimSuggestion s, Instant time) {
-    boolean held = s.verdict() == TrimVerdict.HELD_BACK;
-    double nan = Double.NaN;
-    return new SuggestionRow(time, s.verdict().name().toLowerCase(java.util.Locale.ROOT), 100 * s.trim(),
-        s.limitK(),
-        held ? nan : s.hold().peakUpperK(), held ? nan : s.trimmed().peakUpperK(),
-        held ? nan : s.hold().maxCellMeltFraction(), held ? nan : s.trimmed().maxCellMeltFraction(),
-        held ? nan : s.hold().methaneConversion(), held ? nan : s.trimmed().methaneConversion(),
-        held ? nan : s.hold().horizonS(), s.message(), "ADVISORY");
+    });
   }
 
   // --- operator actions (any thread; carried out on the estimator thread) ---------------------
@@ -511,21 +466,9 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
     if (alarms == null) {
       return 0;
     }
-    // Bad for any signal; stale only for signals that report continuously: the analyzer
-    // reports every period, so between results it is expected to be silent (the estimator
-    // itself flags an analyzer silent for longer than its period plus dead time)
-    Set<String> badOrStale = new TreeSet<>();
-    for (org.plateward.signals.Signal s : org.plateward.signals.Signal.values()) {
-      boolean stale = aligned.stale().contains(s) && s.kind() != org.plateward.signals.Signal.Kind.ANALYZER;
-      if (aligned.frame().quality(s) == Quality.BAD || stale) {
-        badOrStale.add(s.id());
-      }
-    }
-    AlarmInputs in = new AlarmInputs(e.time(), e.peakPlateTempK(), e.peakPlateTempSdK(),
-        e.maxCellMeltFraction(), e.timeToExhaustS(), e.status().text(), badOrStale,
-        link != ConnectionState.CONNECTED,
-        h != null && h.health().state() == HistoryHealth.State.NOT_KEEPING);
-    for (AlarmEvent ev : alarms.evaluate(in)) {
+    List<AlarmEvent> events = stage.judge(e, BadOrStale.live(aligned.frame(), aligned.stale()),
+        link != ConnectionState.CONNECTED, h != null && h.health().state() == HistoryHealth.State.NOT_KEEPING);
+    for (AlarmEvent ev : events) {
       tell("alarm " + ev.alarm().key() + " [" + ev.priority().key() + "] " + ev.transition() + ": " + ev.message());
     }
     alarmStatuses = alarms.statuses();

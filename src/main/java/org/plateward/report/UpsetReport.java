@@ -4,12 +4,11 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Set;
-import java.util.TreeSet;
 import org.plateward.alarms.AlarmAudit;
 import org.plateward.alarms.AlarmBoard;
 import org.plateward.alarms.AlarmEvent;
 import org.plateward.alarms.AlarmInputs;
+import org.plateward.alarms.BadOrStale;
 import org.plateward.alarms.AlarmSettings;
 import org.plateward.alarms.HistoryAlarmAudit;
 import org.plateward.alarms.OperatorAction;
@@ -18,8 +17,6 @@ import org.plateward.history.EstimateRow;
 import org.plateward.reactor.Grid;
 import org.plateward.reactor.UnitSpec;
 import org.plateward.signals.Frame;
-import org.plateward.signals.Quality;
-import org.plateward.signals.Signal;
 import org.plateward.softsensor.Estimate;
 import org.plateward.softsensor.EstimationLoop;
 import org.plateward.softsensor.FrameSource;
@@ -75,14 +72,9 @@ public final class UpsetReport {
     return EstimationLoop.run(source, sensor, (Frame f, Estimate e, java.util.Map<String, Double> truth) -> {
       record.add(ReportPoint.of(e));
       if (board != null) {
-        Set<String> bad = new TreeSet<>();
-        for (Signal s : Signal.values()) {
-          if (f.quality(s) == Quality.BAD) {
-            bad.add(s.id());
-          }
-        }
+        // the live rule for a recorded frame (BadOrStale): history has no link to lose
         board.evaluate(new AlarmInputs(e.time(), e.peakPlateTempK(), e.peakPlateTempSdK(), e.maxCellMeltFraction(),
-            e.timeToExhaustS(), e.status().text(), bad, false, false));
+            e.timeToExhaustS(), e.status().text(), BadOrStale.recorded(f), false, false));
       }
     }, null);
   }

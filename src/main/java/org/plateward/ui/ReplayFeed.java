@@ -6,34 +6,28 @@ import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Set;
-import java.util.TreeSet;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentLinkedQueue;
 import java.util.function.Consumer;
-import org.plateward.advisor.FuelTrimAdvisor;
-import org.plateward.advisor.PosteriorPlate;
 import org.plateward.advisor.TrimSettings;
+import org.plateward.live.AdvisoryStage;
 import org.plateward.advisor.TrimSuggestion;
 import org.plateward.alarms.ActionKind;
 import org.plateward.alarms.ActionResult;
 import org.plateward.alarms.AlarmAudit;
 import org.plateward.alarms.AlarmBoard;
 import org.plateward.alarms.AlarmEvent;
-import org.plateward.alarms.AlarmInputs;
+import org.plateward.alarms.BadOrStale;
 import org.plateward.alarms.AlarmKind;
 import org.plateward.alarms.AlarmSettings;
 import org.plateward.alarms.HistoryAlarmAudit;
 import org.plateward.estimation.FilterSettings;
 import org.plateward.history.HistoryHealth;
 import org.plateward.history.HistoryRecorder;
-import org.plateward.reactor.PlateReactorModel;
 import org.plateward.reactor.UnitSpec;
 import org.plateward.replay.HistoryFrameSource;
 import org.plateward.replay.ReplayFrameSource;
 import org.plateward.signals.Frame;
-import org.plateward.signals.Quality;
-import org.plateward.signals.Signal;
 import org.plateward.softsensor.Estimate;
 import org.plateward.softsensor.FrameSource;
 import org.plateward.softsensor.ReactorSoftSensor;
@@ -54,7 +48,6 @@ import org.slf4j.LoggerFactory;
  */
 public final class ReplayFeed implements DisplayFeed {
   private static final Logger LOG = LoggerFactory.getLogger(ReplayFeed.class);
-  private static final double ADVICE_EVERY_S = 30.0;
 
   private final UnitSpec unit;
   private final String sourceName;
@@ -63,8 +56,8 @@ public final class ReplayFeed implements DisplayFeed {
   private final double lastS;
   private final long frameCount;
   private final ReactorSoftSensor sensor;
+  private final AdvisoryStage stage;
   private final AlarmBoard board;
-  private final FuelTrimAdvisor advisor;
   private final HistoryRecorder audit;
   private final ConcurrentLinkedQueue<Runnable> actions = new ConcurrentLinkedQueue<>();
   private final Object lock = new Object();
@@ -78,13 +71,12 @@ public final class ReplayFeed implements DisplayFeed {
   private Thread thread;
   // feed thread only
   private TrimSuggestion advice;
-  private double adviceAtS = Double.NEGATIVE_INFINITY;
   private Instant headTime;
   private Snapshot lastSnapshot;
   private Consumer<Snapshot> sink;
 
-  private ReplayFeed(UnitSpec unit, AlarmSettings alarms, String sourceName, FrameSource source,
-      double firstS, double lastS, long frameCount, HistoryRecorder audit) {
+  private ReplayFeed(UnitSpec unit, AlarmSettings alarms, TrimSettings advisorSettings, String sourceName,
+      FrameSource source, double firstS, double lastS, long frameCount, HistoryRecorder audit) {
     this.unit = unit;
     this.sourceName = sourceName;
     this.source = source;
@@ -93,24 +85,24 @@ public final class ReplayFeed implements DisplayFeed {
     this.frameCount = frameCount;
     this.audit = audit;
     this.sensor = new ReactorSoftSensor(unit, SoftSensorSettings.defaults(), FilterSettings.defaults());
-    this.board = alarms == null ? null
-        : new AlarmBoard(alarms, audit == null ? AlarmAudit.NONE : new HistoryAlarmAudit(audit));
-    this.advisor = alarms == null ? null : new FuelTrimAdvisor(
-        new PlateReactorModel(unit, sensor.model().grid(), PlateReactorModel.Options.DEFAULT),
-        TrimSettings.defaults(alarms.definition(AlarmKind.PEAK_HIGH).limit()));
+    this.stage = new AdvisoryStage(unit, sensor, alarms, advisorSettings,
+        audit == null ? AlarmAudit.NONE : new HistoryAlarmAudit(audit));
+    this.board = stage.board();
   }
 
   /**
    * A replay file. Its frames are counted first (one quick read) so the controls know the span.
    *
    * @param unit the unit the recording is of
-   * @param alarms advisory alarm definitions (null: none judged)
+   * @param alarms advisory alarm definitions (null: none judged, and no advice)
+   * @param advisorSettings the fuel-trim advisor's settings (null: the defaults with the
+   *     peak_high limit, as live)
    * @param file the replay file
    * @param audit where alarm transitions and operator actions go (null: not kept)
    * @throws IOException when the file cannot be read or is not a replay file
    */
-  public static ReplayFeed ofFile(UnitSpec unit, AlarmSettings alarms, Path file, HistoryRecorder audit)
-      throws IOException {
+  public static ReplayFeed ofFile(UnitSpec unit, AlarmSettings alarms, TrimSettings advisorSettings, Path file,
+      HistoryRecorder audit) throws IOException {
     double first = Double.NaN;
     double last = Double.NaN;
     long n = 0;
@@ -126,18 +118,18 @@ public final class ReplayFeed implements DisplayFeed {
     if (n == 0) {
       throw new IOException(file + ": no frames in the file");
     }
-    return new ReplayFeed(unit, alarms, "replay: " + file.getFileName(), ReplayFrameSource.open(file),
+    return new ReplayFeed(unit, alarms, advisorSettings, "replay: " + file.getFileName(), ReplayFrameSource.open(file),
         first, last, n, audit);
   }
 
   /**
-   * A period [from, to) of a history file.
+   * A period [from, to) of a history file; alarms and advisor as for {@link #ofFile}.
    *
    * @throws org.plateward.history.HistoryException when the history cannot be read
    */
-  public static ReplayFeed ofHistory(UnitSpec unit, AlarmSettings alarms, Path db, Instant from, Instant to,
-      HistoryRecorder audit) throws org.plateward.history.HistoryException {
-    return new ReplayFeed(unit, alarms, "replay: " + db.getFileName() + " " + from + " .. " + to,
+  public static ReplayFeed ofHistory(UnitSpec unit, AlarmSettings alarms, TrimSettings advisorSettings, Path db,
+      Instant from, Instant to, HistoryRecorder audit) throws org.plateward.history.HistoryException {
+    return new ReplayFeed(unit, alarms, advisorSettings, "replay: " + db.getFileName() + " " + from + " .. " + to,
         HistoryFrameSource.open(db, from, to), Timeline.seconds(from), Timeline.seconds(to) - 1.0, -1, audit);
   }
 
@@ -256,39 +248,18 @@ public final class ReplayFeed implements DisplayFeed {
   private Snapshot step(Frame f) {
     Estimate e = sensor.accept(f);
     headTime = e.time();
-    List<AlarmEvent> events = List.of();
-    if (board != null) {
-      Set<String> bad = new TreeSet<>();
-      for (Signal s : Signal.values()) {
-        Quality q = f.quality(s);
-        // a recording has no subscription to go stale: Bad, or missing for a signal that reports
-        // every frame, counts (the analyzer is silent between results by design)
-        if (q == Quality.BAD || (q == Quality.MISSING && s.kind() != Signal.Kind.ANALYZER)) {
-          bad.add(s.id());
-        }
+    // the live path's alarms and advice (AdvisoryStage); a recording has no link to lose, and
+    // its MISSING values of continuously reporting signals stand for the aligner's stale flag
+    List<AlarmEvent> events = stage.judge(e, BadOrStale.recorded(f), false,
+        audit != null && audit.health().state() == HistoryHealth.State.NOT_KEEPING);
+    stage.advise(e, sensor).ifPresent(sug -> {
+      advice = sug;
+      if (audit != null) {
+        audit.appendSuggestion(AdvisoryStage.suggestionRow(sug, e.time()));
       }
-      events = board.evaluate(new AlarmInputs(e.time(), e.peakPlateTempK(), e.peakPlateTempSdK(),
-          e.maxCellMeltFraction(), e.timeToExhaustS(), e.status().text(), bad, false,
-          audit != null && audit.health().state() == HistoryHealth.State.NOT_KEEPING));
-    }
-    advise(e);
+    });
     return new Snapshot(f, e, EstimatorReadout.predictedOutputsK(sensor), sensor.lastFastChannelStatus(),
         board == null ? List.of() : board.statuses(), events, advice);
-  }
-
-  private void advise(Estimate e) {
-    double tS = Timeline.seconds(e.time());
-    if (advisor == null || !Double.isFinite(e.peakPlateTempK()) || tS - adviceAtS < ADVICE_EVERY_S) {
-      return;
-    }
-    adviceAtS = tS;
-    try {
-      PosteriorPlate post = PosteriorPlate.of(sensor);
-      advisor.consider(tS, post.enthalpyJPerM2(), sensor.heldInputs(), post.parameters(), e.peakPlateTempSdK())
-          .ifPresent(sug -> advice = sug);
-    } catch (RuntimeException ex) {
-      LOG.warn("fuel-trim advice at {} failed: {}", e.time(), ex.toString());
-    }
   }
 
   @Override

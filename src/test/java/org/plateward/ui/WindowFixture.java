@@ -36,7 +36,7 @@ final class WindowFixture implements AutoCloseable {
   static WindowFixture open(Path recording, HistoryRecorder audit) throws Exception {
     Stage primary = FxToolkit.registerPrimaryStage();
     PlatewardConfig cfg = PlatewardConfig.load(CONFIG);
-    ReplayFeed feed = ReplayFeed.ofFile(cfg.unit(), cfg.alarms(), recording, audit);
+    ReplayFeed feed = ReplayFeed.ofFile(cfg.unit(), cfg.alarms(), cfg.advisor(), recording, audit);
     ControlRoomWindow[] w = new ControlRoomWindow[1];
     FxToolkit.setupStage(stage -> {
       w[0] = new ControlRoomWindow(feed, cfg.alarms());
