@@ -64,6 +64,10 @@ public final class ReplayCommand implements Callable<Integer> {
   @Option(names = "--out", paramLabel = "estimates.csv", description = "Write one estimate per frame here.")
   Path out;
 
+  @Option(names = "--advice",
+      description = "Also ask the fuel-trim advisor, as live (every forecast_every of plant time); slower, each question costs a few forecasts.")
+  boolean advice;
+
   @Option(names = "--no-progress", description = "Do not draw the progress bar on stderr.")
   boolean noProgress;
 
@@ -118,6 +122,7 @@ public final class ReplayCommand implements Callable<Integer> {
     PrintWriter outText = spec.commandLine().getOut();
     ReactorSoftSensor sensor = new ReactorSoftSensor(cfg.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
     TwinScore score = new TwinScore(600.0);
+    ReplayAdvisories advisories = ReplayAdvisories.of(cfg.unit(), sensor, cfg.alarms(), cfg.advisor(), advice);
     EstimationLoop.Stats stats;
     try (ReplayFrameSource src = ReplayFrameSource.open(input)) {
       checkUnit(src, cfg);
@@ -129,6 +134,9 @@ public final class ReplayCommand implements Callable<Integer> {
           }
           if (!truth.isEmpty()) {
             score.add(f.time().getEpochSecond() + 1e-9 * f.time().getNano(), e, truth);
+          }
+          if (advisories != null) {
+            advisories.add(f, e, sensor);
           }
         }, totalLines > 0 ? n -> progress(err, n, totalLines) : null);
       } finally {
@@ -153,11 +161,20 @@ public final class ReplayCommand implements Callable<Integer> {
     if (score.hasTruth()) {
       outText.print(score.summary());
     }
+    printAdvisories(outText, advisories);
     if (out != null) {
       outText.println("estimates written to " + out);
     }
     outText.flush();
     return 0;
+  }
+
+  private static void printAdvisories(PrintWriter out, ReplayAdvisories advisories) {
+    if (advisories == null) {
+      out.println("no [alarms] in the configuration: no advisory alarms judged");
+    } else {
+      advisories.print(out);
+    }
   }
 
   /** Whether the configuration file is a fleet file ({@code [[units]]}). */
@@ -174,6 +191,10 @@ public final class ReplayCommand implements Callable<Integer> {
     if (out != null) {
       throw new CommandLine.ParameterException(spec.commandLine(),
           "--out names one file; with several inputs (or --out-dir) give --out-dir DIR");
+    }
+    if (advice) {
+      throw new CommandLine.ParameterException(spec.commandLine(),
+          "--advice goes with one --input or with --db (several inputs are replayed for their estimates only)");
     }
     int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
     if (n < 1) {
@@ -254,6 +275,7 @@ public final class ReplayCommand implements Callable<Integer> {
     ReactorSoftSensor sensor = new ReactorSoftSensor(cfg.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
     EstimationLoop.Stats stats;
     long[] byStatus = new long[org.plateward.softsensor.EstimatorStatus.values().length];
+    ReplayAdvisories advisories = ReplayAdvisories.of(cfg.unit(), sensor, cfg.alarms(), cfg.advisor(), advice);
     try (HistoryFrameSource src = HistoryFrameSource.open(db, t1, t2)) {
       EstimateWriter w = out == null ? null : EstimateWriter.create(out, db.getFileName().toString());
       try {
@@ -261,6 +283,9 @@ public final class ReplayCommand implements Callable<Integer> {
           byStatus[e.status().ordinal()]++;
           if (w != null) {
             w.write(e);
+          }
+          if (advisories != null) {
+            advisories.add(f, e, sensor);
           }
         }, noProgress ? null : n -> {
           err.print("\rreplayed " + n + " frames");
@@ -295,6 +320,7 @@ public final class ReplayCommand implements Callable<Integer> {
     outText.println(st);
     outText.printf(Locale.ROOT, "filter steps %d, model Jacobian builds %d, analyzer results not placed %d, drift flags %d%n",
         sensor.blocks(), sensor.jacobianBuilds(), sensor.droppedAnalyzerResults(), sensor.driftFlags().size());
+    printAdvisories(outText, advisories);
     if (out != null) {
       outText.println("estimates written to " + out);
     }

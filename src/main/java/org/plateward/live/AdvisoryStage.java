@@ -51,8 +51,21 @@ public final class AdvisoryStage {
    */
   public AdvisoryStage(UnitSpec unit, ReactorSoftSensor sensor, AlarmSettings alarms, TrimSettings advisor,
       AlarmAudit audit) {
+    this(unit, sensor, alarms, advisor, audit, true);
+  }
+
+  /**
+   * The alarms alone, no advisor (a headless replay that was not asked for advice: each
+   * question costs a few sigma-point forecasts, far more than the estimate itself).
+   */
+  public static AdvisoryStage alarmsOnly(UnitSpec unit, ReactorSoftSensor sensor, AlarmSettings alarms, AlarmAudit audit) {
+    return new AdvisoryStage(unit, sensor, alarms, null, audit, false);
+  }
+
+  private AdvisoryStage(UnitSpec unit, ReactorSoftSensor sensor, AlarmSettings alarms, TrimSettings advisor,
+      AlarmAudit audit, boolean advise) {
     this.board = alarms == null ? null : new AlarmBoard(alarms, audit);
-    TrimSettings ts = alarms == null ? null
+    TrimSettings ts = alarms == null || !advise ? null
         : advisor != null ? advisor : TrimSettings.defaults(alarms.definition(AlarmKind.PEAK_HIGH).limit());
     this.advisor = ts == null ? null : new FuelTrimAdvisor(
         new PlateReactorModel(unit, sensor.model().grid(), PlateReactorModel.Options.DEFAULT), ts);

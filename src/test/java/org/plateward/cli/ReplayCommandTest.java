@@ -130,4 +130,48 @@ class ReplayCommandTest {
     assertThat(r.exit()).isEqualTo(2);
     assertThat(r.err()).contains("unit: recording is of unit 'XX-9'");
   }
+
+  /**
+   * The headless replay judges the configured advisory alarms through the live path's stage: on
+   * the first 25 min of the fuel surge the summary counts the same transitions as an
+   * independent estimator + {@link org.plateward.live.AdvisoryStage} run over the same frames,
+   * and lists the time-to-exhaust alarm the surge raises.
+   */
+  @Test
+  void replaySummarisesTheAdvisoryAlarmsOfTheLivePath() throws Exception {
+    Path in = cut("fuel-surge", 1500, l -> l);
+    var cfg = org.plateward.config.PlatewardConfig.load(Path.of("config/plateward.toml"));
+    var sensor = new org.plateward.softsensor.ReactorSoftSensor(cfg.unit(),
+        org.plateward.softsensor.SoftSensorSettings.defaults(), org.plateward.estimation.FilterSettings.defaults());
+    var stage = org.plateward.live.AdvisoryStage.alarmsOnly(cfg.unit(), sensor, cfg.alarms(),
+        org.plateward.alarms.AlarmAudit.NONE);
+    List<org.plateward.alarms.AlarmEvent> events = new ArrayList<>();
+    try (var src = org.plateward.replay.ReplayFrameSource.open(in)) {
+      org.plateward.signals.Frame f;
+      while ((f = src.next()) != null) {
+        var e = sensor.accept(f);
+        events.addAll(stage.judge(e, org.plateward.alarms.BadOrStale.recorded(f), false, false));
+      }
+    }
+    long annunciations = events.stream().filter(org.plateward.alarms.AlarmEvent::annunciation).count();
+    assertThat(annunciations).isPositive();
+    var r = PlatewardCommandTest.run("replay", "--input", in.toString(), "--no-progress");
+    assertThat(r.exit()).as(r.err()).isZero();
+    assertThat(r.out()).contains(String.format("advisory alarms (configured definitions): %d transitions, %d annunciations",
+        events.size(), annunciations));
+    assertThat(r.out()).contains("exhaust_low").contains("normal -> unacknowledged")
+        .contains("fuel-trim advice not asked");
+  }
+
+  @Test
+  void replayWithAdviceListsTheSuggestionsAndSeveralInputsRefuseIt() throws Exception {
+    Path in = cut("fuel-surge", 300, l -> l);
+    var r = PlatewardCommandTest.run("replay", "--input", in.toString(), "--advice", "--no-progress");
+    assertThat(r.exit()).as(r.err()).isZero();
+    assertThat(r.out()).containsPattern("fuel-trim suggestions \\(advisory\\): [1-9]");
+    var two = PlatewardCommandTest.run("replay", "--input", in.toString(), "--input",
+        cut("feed-drop", 10, l -> l).toString(), "--advice", "--no-progress");
+    assertThat(two.exit()).isEqualTo(2);
+    assertThat(two.err()).contains("--advice goes with one --input or with --db");
+  }
 }
