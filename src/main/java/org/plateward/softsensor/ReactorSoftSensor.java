@@ -76,6 +76,9 @@ public final class ReactorSoftSensor {
   private double t0S = Double.NaN;
   private double lastEpochS = Double.NaN;
   private final double[] lastGoodInput = new double[8];
+  /** Window of the held inputs of every forecast (s): see {@link RecentInputs}. */
+  static final double HELD_INPUT_WINDOW_S = 30.0;
+  private final RecentInputs recentInputs = new RecentInputs(8, HELD_INPUT_WINDOW_S, 256);
   private final boolean[] haveInput = new boolean[8];
 
   // block accumulators
@@ -246,6 +249,7 @@ public final class ReactorSoftSensor {
       if (frame.usable(INPUTS[i])) {
         double v = frame.valueSi(INPUTS[i]);
         lastGoodInput[i] = v;
+        recentInputs.add(i, tS, v);
         haveInput[i] = true;
         inSum[i] += v;
         inCount[i]++;
@@ -843,7 +847,7 @@ public final class ReactorSoftSensor {
     }
     double[] e0 = enthalpies(x);
     forecast.setJacobian(jc, e0);
-    double[] u = lastGoodInput.clone();
+    double[] u = heldRaw();
     OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, u));
     double mean = forecast.secondsToExhaust(e0, op, dynamics.parameters(x), settings.horizonS());
     if (!Double.isFinite(mean)) {
@@ -881,12 +885,25 @@ public final class ReactorSoftSensor {
   }
 
   /**
-   * The inputs the estimator uses now, for what-if forecasts: the last good value of each,
-   * corrected by the estimated systematic meter errors (SI).
+   * The inputs the estimator uses now, for what-if forecasts: the mean of each over its last
+   * {@value #HELD_INPUT_WINDOW_S} s of usable values, corrected by the estimated systematic
+   * meter errors (SI).
    */
   public OperatingPoint heldInputs() {
-    double[] u = lastGoodInput.clone();
+    double[] u = heldRaw();
     return ReactorDynamics.operatingPoint(ekf == null ? u : dynamics.correctedInputs(ekf.state(), u));
+  }
+
+  /** The held inputs before the meter-error correction: recent means, else the last good value. */
+  private double[] heldRaw() {
+    double[] u = lastGoodInput.clone();
+    for (int i = 0; i < u.length; i++) {
+      double m = recentInputs.mean(i);
+      if (Double.isFinite(m)) {
+        u[i] = m;
+      }
+    }
+    return u;
   }
 
   private double[] enthalpies(double[] x) {

@@ -1,0 +1,51 @@
+package org.plateward.softsensor;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.SplittableRandom;
+import org.junit.jupiter.api.Test;
+
+/** The held inputs of a forecast: a window mean, checked against the arithmetic mean and σ/√N. */
+class RecentInputsTest {
+  @Test
+  void meanOverTheWindowOnly() {
+    RecentInputs r = new RecentInputs(2, 30.0, 64);
+    assertThat(r.mean(0)).isNaN();
+    for (int t = 0; t < 100; t++) {
+      r.add(0, t, t); // a ramp: the last 30 values are 70..99, mean 84.5
+    }
+    assertThat(r.mean(0)).isEqualTo(84.5);
+    assertThat(r.mean(1)).isNaN();
+    // a signal that went silent keeps the mean of its last window
+    r.add(1, 5.0, 2.0);
+    r.add(1, 6.0, 4.0);
+    assertThat(r.mean(1)).isEqualTo(3.0);
+  }
+
+  @Test
+  void meterNoiseFallsAsOneOverRootN() {
+    // white noise of σ = 0.5 % on a reading of 1: the 30-frame mean has σ = 0.5 %/√30 (0.091 %)
+    SplittableRandom rnd = new SplittableRandom(11);
+    RecentInputs r = new RecentInputs(1, 30.0, 64);
+    double sum2 = 0.0;
+    int samples = 0;
+    for (int t = 0; t < 60_000; t++) {
+      r.add(0, t, 1.0 + 0.005 * gauss(rnd));
+      if (t >= 30 && t % 30 == 0) {
+        double d = r.mean(0) - 1.0;
+        sum2 += d * d;
+        samples++;
+      }
+    }
+    double sd = Math.sqrt(sum2 / samples);
+    // 2000 independent window means: the sample σ is within about 5 % of the true one
+    assertThat(sd).isCloseTo(0.005 / Math.sqrt(30), within(0.1 * 0.005 / Math.sqrt(30)));
+  }
+
+  private static double gauss(SplittableRandom r) {
+    double u = r.nextDouble();
+    double v = r.nextDouble();
+    return Math.sqrt(-2.0 * Math.log(1.0 - u)) * Math.cos(2.0 * Math.PI * v);
+  }
+}
