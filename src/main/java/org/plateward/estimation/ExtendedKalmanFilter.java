@@ -861,6 +861,11 @@ public final class ExtendedKalmanFilter {
     return Matrices.copy(p);
   }
 
+  /** One entry P[i][j] of the covariance, without copying the matrix. */
+  public double covarianceEntry(int i, int j) {
+    return p[i][j];
+  }
+
   /** Factor λ ≥ 1 the next propagation applies to Q (1 when adaptation is off). */
   public double processNoiseInflation() {
     return settings.adaptiveProcessNoise() ? noiseAdapter.inflation() : 1.0;

@@ -160,6 +160,22 @@ public final class PlateReactorModel {
   public void jacobian(
       double[] e, OperatingPoint u, ModelParameters p, ModelEvaluation base, double[][] dfde,
       double[][] dhde) {
+    jacobian(e, u, p, base, dfde, dhde, null, null);
+  }
+
+  /**
+   * As {@link #jacobian(double[], OperatingPoint, ModelParameters, ModelEvaluation, double[][],
+   * double[][])}, with the plate temperature and melt fraction of cell j moved along given
+   * slopes dT/de and dφ/de instead of through the map T(e), φ(e) at the point (a statistical
+   * linearisation of the map over a spread of enthalpy, Gelb 1974, where the point slope jumps
+   * at the melting band's edges). A NaN slope, or null arrays, use the map at the point.
+   *
+   * @param plateSlopeKPerJ dT/de per cell, K per J/m2 (null: the map)
+   * @param meltSlopePerJ dφ/de per cell, per J/m2 (null: the map)
+   */
+  public void jacobian(
+      double[] e, OperatingPoint u, ModelParameters p, ModelEvaluation base, double[][] dfde,
+      double[][] dhde, double[] plateSlopeKPerJ, double[] meltSlopePerJ) {
     double loss = p.heatLossCoefficientWPerM2K();
     double[] tK = base.plateScratch;
     double[] phi = base.meltScratch;
@@ -171,8 +187,13 @@ public final class PlateReactorModel {
     for (int j = 0; j < n; j++) {
       double step = 1e-3 * plate.sensibleJPerM2K(); // one millikelvin of sensible heat
       double ej = e[j] + step;
-      tK[j] = plate.tempK(ej);
-      phi[j] = plate.meltFraction(ej);
+      if (plateSlopeKPerJ != null && Double.isFinite(plateSlopeKPerJ[j])) {
+        tK[j] = base.plateK[j] + plateSlopeKPerJ[j] * step;
+        phi[j] = base.melt[j] + meltSlopePerJ[j] * step;
+      } else {
+        tK[j] = plate.tempK(ej);
+        phi[j] = plate.meltFraction(ej);
+      }
       rs.copyFace(base.reforming, j);
       reforming.march(tK, p.reformingActivity(), p.heatTransferMultiplier(), u.reformingPressurePa(), j, j, rs);
       cs.copyFace(base.combustion, j + 1);

@@ -54,6 +54,11 @@ public final class ReactorDynamics implements Dynamics {
   private final double[][] heldOutputs;
   private final double[] refTempK;
   private final boolean[] refInBand;
+  /** σ of each cell's enthalpy state (K of sensible heat); null: point linearisation. */
+  private double[] cellSdK;
+  private final double[] plateSlope;
+  private final double[] meltSlope;
+  private final double[] refSlope;
   private final double[] refU = new double[8];
   private final double[] refP = new double[4];
   private long version = -1;
@@ -85,6 +90,9 @@ public final class ReactorDynamics implements Dynamics {
     this.n = layout.size();
     this.cells = model.cells();
     this.capacity = model.plate().sensibleJPerM2K();
+    this.plateSlope = new double[model.cells()];
+    this.meltSlope = new double[model.cells()];
+    this.refSlope = new double[model.cells()];
     this.lagS = lagS.clone();
     this.refreshS = refreshS;
     this.refreshK = refreshK;
@@ -210,6 +218,33 @@ public final class ReactorDynamics implements Dynamics {
     copyHeld(dfdx);
   }
 
+  /** Relative change of a cell's spread slope dT/de that makes the held Jacobian stale. */
+  static final double SLOPE_TOLERANCE = 0.25;
+  /**
+   * Linearise T(e) and φ(e) over each cell's spread rather than at the mean (statistical
+   * linearisation, Gelb 1974; {@link CellSpread}). Near the
+   * melting band the point slope jumps between 1/C outside and about 1/60 of it inside; the
+   * spread slope moves smoothly, so a cell whose enthalpy may lie on either side keeps the
+   * measurements' hold on it, and the covariance does not collapse when the mean crosses an
+   * edge. Far from the band it equals the point slope. Null: linearise at the mean.
+   *
+   * @param sdK σ of each cell's enthalpy state, K of sensible heat (copied)
+   */
+  public void cellSpread(double[] sdK) {
+    cellSdK = sdK == null ? null : sdK.clone();
+  }
+
+  /** dT/de of cell j over its spread ({@link CellSpread#slopes}); dφ/de into {@code melt[j]} if given. */
+  private double spreadSlopes(int j, double meanK, double[] melt) {
+    double sl = CellSpread.slopes(model.plate(), capacity, meanK, cellSdK[j], meltOne);
+    if (melt != null) {
+      melt[j] = meltOne[0];
+    }
+    return sl;
+  }
+
+  private final double[] meltOne = new double[1];
+
   /** Step length the filter uses, s (for the age of the held Jacobian). */
   public void stepLengthS(double h) {
     this.lastStepS = h;
@@ -233,6 +268,15 @@ public final class ReactorDynamics implements Dynamics {
       double phi = base.meltFraction(j);
       if ((phi > 0.0 && phi < 1.0) != refInBand[j]) {
         return true;
+      }
+    }
+    if (cellSdK != null) {
+      for (int j = 0; j < cells; j++) {
+        double sl = spreadSlopes(j, x[j], null);
+        double ref = refSlope[j];
+        if (Math.abs(sl - ref) > SLOPE_TOLERANCE * Math.max(Math.abs(sl), Math.abs(ref))) {
+          return true;
+        }
       }
     }
     correctInto(x, u, uEff);
@@ -261,7 +305,15 @@ public final class ReactorDynamics implements Dynamics {
     for (int j = 0; j < cells; j++) {
       e[j] = x[j] * capacity;
     }
-    model.jacobian(e, op, p, base, dfde, dhde);
+    if (cellSdK != null) {
+      for (int j = 0; j < cells; j++) {
+        refSlope[j] = spreadSlopes(j, x[j], meltSlope);
+        plateSlope[j] = refSlope[j];
+      }
+      model.jacobian(e, op, p, base, dfde, dhde, plateSlope, meltSlope);
+    } else {
+      model.jacobian(e, op, p, base, dfde, dhde);
+    }
     for (double[] row : held) {
       Arrays.fill(row, 0.0);
     }

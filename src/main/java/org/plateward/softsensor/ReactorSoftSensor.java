@@ -457,6 +457,8 @@ public final class ReactorSoftSensor {
     // (a cell then overshoots by tens of kelvin for one block): there, 2.5 s sub-steps
     int sub = nearBand(before) ? Math.max(1, (int) Math.ceil(dt / BAND_SUBSTEP_S - 1e-9)) : 1;
     dynamics.stepLengthS(Math.min(dt, settings.blockS()) / sub);
+    // the Jacobian linearises T(e) over each cell's spread, not at its mean (ReactorDynamics.cellSpread)
+    dynamics.cellSpread(cellSd());
     long buildsBefore = dynamics.builds();
     for (int k = 0; k < sub; k++) {
       ekf.propagate(u, dt / sub);
@@ -548,24 +550,9 @@ public final class ReactorSoftSensor {
     clearBlock();
   }
 
-  /** Nodes and weights of the 5-point Gauss-Hermite rule for the standard normal (exact to degree 9). */
-  private static final double[] GH_NODE = {-2.856970013872806, -1.355626179974266, 0.0, 1.355626179974266, 2.856970013872806};
-  private static final double[] GH_WEIGHT = {0.011257411327721, 0.222075922005613, 0.533333333333333, 0.222075922005613, 0.011257411327721};
-
-  /**
-   * σ of a cell's plate temperature when its enthalpy state is N(mean, sd²): the spread of
-   * T(x) by Gauss-Hermite quadrature (statistical linearisation through the kinks of T(e) at
-   * the band edges, where the derivative alone is 0 or 1 and a secant depends on the side).
-   */
+  /** σ of a cell's plate temperature when its enthalpy state is N(mean, sd²) ({@link CellSpread}). */
   private double temperatureSd(double mean, double sd) {
-    double m1 = 0.0;
-    double m2 = 0.0;
-    for (int q = 0; q < GH_NODE.length; q++) {
-      double t = plate.tempK((mean + sd * GH_NODE[q]) * capacity);
-      m1 += GH_WEIGHT[q] * t;
-      m2 += GH_WEIGHT[q] * t * t;
-    }
-    return Math.sqrt(Math.max(m2 - m1 * m1, 0.0));
+    return CellSpread.temperatureSd(plate, capacity, mean, sd);
   }
 
   /** Whether any cell's enthalpy lies within {@link #BAND_MARGIN_K} (of sensible heat) of the melting band. */
@@ -892,6 +879,15 @@ public final class ReactorSoftSensor {
   public OperatingPoint heldInputs() {
     double[] u = heldRaw();
     return ReactorDynamics.operatingPoint(ekf == null ? u : dynamics.correctedInputs(ekf.state(), u));
+  }
+
+  /** σ of each cell's enthalpy state now (K of sensible heat). */
+  private double[] cellSd() {
+    double[] sd = new double[cells];
+    for (int j = 0; j < cells; j++) {
+      sd[j] = Math.sqrt(Math.max(ekf.covarianceEntry(j, j), 0.0));
+    }
+    return sd;
   }
 
   /** The held inputs before the meter-error correction: recent means, else the last good value. */
