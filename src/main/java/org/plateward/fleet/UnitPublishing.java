@@ -21,16 +21,26 @@ public final class UnitPublishing {
    *
    * @param publisher started with {@code unitId} among its units
    * @param unitId the unit's folder
-   * @param next the sink after publishing (history, alarms); may be null
+   * @param next the sink after publishing (history, listeners); may be null
    * @return the sink to open the lane with
    */
   public static EstimationLoop.Sink sink(EstimatePublisher publisher, String unitId, EstimationLoop.Sink next) {
+    return sink(publisher, unitId, (f, e) -> 0, next);
+  }
+
+  /**
+   * As {@link #sink(EstimatePublisher, String, EstimationLoop.Sink)}, with the alarms judged
+   * first: {@code alarms} returns the number of alarms standing after this estimate, which is
+   * published with it.
+   */
+  public static EstimationLoop.Sink sink(EstimatePublisher publisher, String unitId,
+      java.util.function.ToIntBiFunction<Frame, Estimate> alarms, EstimationLoop.Sink next) {
     if (!publisher.units().contains(unitId)) {
       throw new IllegalArgumentException("unit " + unitId + " has no folder on the publisher (units: "
           + publisher.units() + ")");
     }
     return (Frame f, Estimate e, Map<String, Double> truth) -> {
-      publisher.publish(unitId, published(e, 0));
+      publisher.publish(unitId, published(e, alarms.applyAsInt(f, e)));
       if (next != null) {
         next.accept(f, e, truth);
       }

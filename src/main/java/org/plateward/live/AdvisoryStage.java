@@ -123,6 +123,18 @@ public final class AdvisoryStage {
     }
   }
 
+  /** How many of these alarms stand (unacknowledged or acknowledged). */
+  public static int active(List<org.plateward.alarms.AlarmStatus> statuses) {
+    int n = 0;
+    for (org.plateward.alarms.AlarmStatus st : statuses) {
+      if (st.state() == org.plateward.alarms.AlarmState.UNACKNOWLEDGED
+          || st.state() == org.plateward.alarms.AlarmState.ACKNOWLEDGED) {
+        n++;
+      }
+    }
+    return n;
+  }
+
   /** What history keeps of a suggestion made at {@code time}. */
   public static SuggestionRow suggestionRow(TrimSuggestion s, Instant time) {
     boolean held = s.verdict() == TrimVerdict.HELD_BACK;

@@ -55,8 +55,13 @@ import org.slf4j.LoggerFactory;
  * and, as in {@link LiveMonitor}, the frames of a gap (every signal MISSING) keep its estimator
  * predicting without correction. The other units are not affected either way.
  *
- * <p>Fleet watch judges no alarms and asks no fuel-trim advisor yet (the single-unit {@link
- * LiveMonitor} does); the published active-alarm count is 0.
+ * <p>Each unit's advisory alarms are judged on its own lane with its own configured definitions
+ * ({@link AdvisoryStage#alarmsOnly}; transitions go to the unit's history and to the change
+ * listeners), and its active-alarm count is published. A lane receives plain frames, in which the
+ * aligner wrote a stale value as MISSING, so the Bad-or-stale rule is the recorded one ({@link
+ * org.plateward.alarms.BadOrStale#recorded}). The fuel-trim advisor is not asked in a fleet: each
+ * question costs a few forecasts, far more than an estimate, for every unit every 30 s. Operator
+ * actions are taken per unit with {@code plateward watch} on that unit's own configuration.
  */
 public final class FleetMonitor implements AutoCloseable {
   private static final Logger LOGGER = LoggerFactory.getLogger(FleetMonitor.class);
@@ -114,6 +119,7 @@ public final class FleetMonitor implements AutoCloseable {
    * @param lane its lane in the pool (estimated, dropped, state)
    * @param historyFile its history file; null when none is kept
    * @param historyOk whether its history is being kept
+   * @param alarms its advisory alarm statuses (empty when its configuration defines none)
    */
   public record UnitStatus(
       String unitId,
@@ -125,7 +131,17 @@ public final class FleetMonitor implements AutoCloseable {
       Estimate latest,
       LaneStatus lane,
       Path historyFile,
-      boolean historyOk) {}
+      boolean historyOk,
+      List<org.plateward.alarms.AlarmStatus> alarms) {
+    public UnitStatus {
+      alarms = List.copyOf(alarms);
+    }
+
+    /** Alarms standing (unacknowledged or acknowledged, not shelved or suppressed). */
+    public int activeAlarms() {
+      return AdvisoryStage.active(alarms);
+    }
+  }
 
   private final Setup setup;
   private final UnitPool pool;
@@ -261,6 +277,8 @@ public final class FleetMonitor implements AutoCloseable {
     final ReactorSoftSensor sensor;
     final HistoryRecorder history;
     final UnitLane lane;
+    final AdvisoryStage stage;
+    volatile List<org.plateward.alarms.AlarmStatus> alarmStatuses = List.of();
     final String runId = UUID.randomUUID().toString();
     final AtomicBoolean failureShown = new AtomicBoolean();
     volatile PlantConnection connection;
@@ -278,10 +296,12 @@ public final class FleetMonitor implements AutoCloseable {
       this.unit = unit;
       this.sensor = new ReactorSoftSensor(unit.unit(), SoftSensorSettings.defaults(), FilterSettings.defaults());
       this.history = openHistory(unit);
+      this.stage = AdvisoryStage.alarmsOnly(unit.unit(), sensor, unit.config().alarms(),
+          history == null ? org.plateward.alarms.AlarmAudit.NONE : new org.plateward.alarms.HistoryAlarmAudit(history));
       this.retryWaitS = setup.retryS();
       this.lane = pool.feed(id, sensor::accept, setup.laneCapacity(),
-          UnitPublishing.sink(setup.publisher(), id, (frame, e, truth) -> {
-            // pool thread, this lane's task only: the sensor is ours alone here
+          UnitPublishing.sink(setup.publisher(), id, this::activeAlarms, (frame, e, truth) -> {
+            // pool thread, this lane's task only: the sensor and the alarm board are ours alone here
             latest = e;
             if (history != null) {
               history.appendFrame(frame);
@@ -291,6 +311,24 @@ public final class FleetMonitor implements AutoCloseable {
               l.accept(id, e);
             }
           }));
+    }
+
+    /**
+     * Judges this unit's alarms on an estimate (pool thread, before it is published) and returns
+     * how many stand.
+     */
+    int activeAlarms(Frame frame, Estimate e) {
+      if (stage.board() == null) {
+        return 0;
+      }
+      boolean lost = link != ConnectionState.CONNECTED;
+      boolean notKept = history != null && history.health().state() == org.plateward.history.HistoryHealth.State.NOT_KEEPING;
+      for (org.plateward.alarms.AlarmEvent ev : stage.judge(e, org.plateward.alarms.BadOrStale.recorded(frame), lost, notKept)) {
+        tell("unit " + id + ": alarm " + ev.alarm().key() + " [" + ev.priority().key() + "] " + ev.transition()
+            + ": " + ev.message());
+      }
+      alarmStatuses = stage.board().statuses();
+      return AdvisoryStage.active(alarmStatuses);
     }
 
     private HistoryRecorder openHistory(FleetUnit u) {
@@ -401,7 +439,7 @@ public final class FleetMonitor implements AutoCloseable {
           data == null ? Double.NaN : (now.toEpochMilli() - data.toEpochMilli()) / 1000.0,
           latest, lane.status(),
           history == null ? null : history.settings().databaseFile(),
-          history != null && history.health().ok());
+          history != null && history.health().ok(), alarmStatuses);
     }
 
     void closeConnection() {

@@ -11,11 +11,11 @@ import org.plateward.softsensor.Estimate;
 
 /**
  * The compact console table of a fleet watch: one line per unit (id, link, data age, hidden
- * peak ± 1σ in degC, max-cell melt fraction, estimator status, frames dropped), under the
- * advisory caution.
+ * peak ± 1σ in degC, max-cell melt fraction, estimator status, standing advisory alarms with the
+ * most urgent priority among them, frames dropped), under the advisory caution.
  */
 public final class FleetTable {
-  private static final String ROW = "%-12s %-16s %9s  %-22s %13s  %-14s %7s%n";
+  private static final String ROW = "%-12s %-16s %9s  %-22s %13s  %-14s %-15s %7s%n";
 
   private FleetTable() {}
 
@@ -33,11 +33,11 @@ public final class FleetTable {
     b.append(String.format(Locale.ROOT, "fleet of %d units at %s%n", units.size(),
         plantNow.truncatedTo(ChronoUnit.SECONDS)));
     b.append(String.format(Locale.ROOT, ROW, "unit", "link", "data age", "hidden peak (1 sigma)",
-        "max-cell melt", "estimator", "dropped"));
+        "max-cell melt", "estimator", "alarms", "dropped"));
     for (FleetMonitor.UnitStatus u : units) {
       b.append(String.format(Locale.ROOT, ROW, u.unitId(), linkWord(u),
           Double.isNaN(u.dataAgeS()) ? "-" : String.format(Locale.ROOT, "%.1f s", u.dataAgeS()),
-          peak(u.latest()), melt(u.latest()), estimatorWord(u), u.lane().dropped()));
+          peak(u.latest()), melt(u.latest()), estimatorWord(u), alarms(u), u.lane().dropped()));
     }
     if (historyNote != null) {
       b.append(historyNote).append(System.lineSeparator());
@@ -66,6 +66,26 @@ public final class FleetTable {
       return "-";
     }
     return String.format(Locale.ROOT, "%.2f", e.maxCellMeltFraction());
+  }
+
+  /** "-" without alarm definitions, else the standing count and the most urgent priority, e.g. "2 (immediate)". */
+  static String alarms(FleetMonitor.UnitStatus u) {
+    if (u.alarms().isEmpty()) {
+      return "-";
+    }
+    int n = u.activeAlarms();
+    if (n == 0) {
+      return "0";
+    }
+    org.plateward.alarms.Priority top = null;
+    for (org.plateward.alarms.AlarmStatus st : u.alarms()) {
+      boolean standing = st.state() == org.plateward.alarms.AlarmState.UNACKNOWLEDGED
+          || st.state() == org.plateward.alarms.AlarmState.ACKNOWLEDGED;
+      if (standing && (top == null || st.priority().ordinal() < top.ordinal())) {
+        top = st.priority();
+      }
+    }
+    return n + " (" + top.key() + ")";
   }
 
   private static String estimatorWord(FleetMonitor.UnitStatus u) {

@@ -1,9 +1,7 @@
 package org.plateward.live;
 
-import org.plateward.advisor.TrimVerdict;
 import org.plateward.alarms.ActionKind;
 import org.plateward.alarms.ActionResult;
-import org.plateward.history.SuggestionRow;
 import java.time.Duration;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.Future;
@@ -16,7 +14,6 @@ import org.plateward.alarms.AlarmBoard;
 import org.plateward.alarms.AlarmEvent;
 import org.plateward.alarms.BadOrStale;
 import org.plateward.alarms.AlarmSettings;
-import org.plateward.alarms.AlarmState;
 import org.plateward.alarms.AlarmStatus;
 import org.plateward.alarms.HistoryAlarmAudit;
 import java.nio.file.Path;
@@ -472,13 +469,7 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
       tell("alarm " + ev.alarm().key() + " [" + ev.priority().key() + "] " + ev.transition() + ": " + ev.message());
     }
     alarmStatuses = alarms.statuses();
-    int active = 0;
-    for (AlarmStatus st : alarmStatuses) {
-      if (st.state() == AlarmState.UNACKNOWLEDGED || st.state() == AlarmState.ACKNOWLEDGED) {
-        active++;
-      }
-    }
-    return active;
+    return AdvisoryStage.active(alarmStatuses);
   }
 
   private void noticeChanges(Estimate e, HistoryRecorder h) {
