@@ -106,13 +106,13 @@ class FleetWatchTest {
           .contains("connected").contains("+/-").contains("degC").doesNotContain("connection lost");
       // each unit's alarms from its own configuration: TM-PR2 defines them (judged on its lane,
       // every definition present), TM-PR3 defines none
-      List<FleetMonitor.UnitStatus> now = fleet.statuses();
-      assertThat(now.get(0).alarms()).extracting(org.plateward.alarms.AlarmStatus::kind)
+      List<FleetMonitor.UnitStatus> unitsNow = fleet.statuses();
+      assertThat(unitsNow.get(0).alarms()).extracting(org.plateward.alarms.AlarmStatus::kind)
           .containsExactlyInAnyOrder(org.plateward.alarms.AlarmKind.values());
-      assertThat(now.get(1).alarms()).isEmpty();
+      assertThat(unitsNow.get(1).alarms()).isEmpty();
       assertThat(table.lines().filter(l -> l.startsWith("unit")).findFirst().orElseThrow()).contains("alarms");
-      assertThat(FleetTable.alarms(now.get(0))).isNotEqualTo("-");
-      assertThat(FleetTable.alarms(now.get(1))).isEqualTo("-");
+      assertThat(FleetTable.alarms(unitsNow.get(0))).isNotEqualTo("-");
+      assertThat(FleetTable.alarms(unitsNow.get(1))).isEqualTo("-");
 
       // one plant's endpoint goes away: its unit shows "connection lost", the other estimates on
       plantA.stopServing();
