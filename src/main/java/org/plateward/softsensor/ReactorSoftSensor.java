@@ -762,6 +762,10 @@ public final class ReactorSoftSensor {
         var += g[a - lo] * p[a][b] * g[b - lo];
       }
     }
+    // ... and at least the spread of the hottest of the three cells (Clark 1961): when two cells
+    // tie on the melting plateau, one pinned and one molten, the argmax flips between them from
+    // one block to the next and the gradient alone flips the σ with it (0.1 K, then 20 K)
+    var = Math.max(var, PeakSpread.varianceOfMax(tK, tSd, p, lo, hi));
     // overall melt fraction and its σ: secant slope of φ over ±1σ of each cell (statistical
     // linearisation; the plain derivative is zero outside the melting band)
     double length = grid.lengthM();

@@ -66,7 +66,7 @@ class CellSpreadTest {
     double width = b - a; // the plateau in kelvin of sensible heat
     for (double[] c : new double[][] {{a - 2.0, 3.0}, {a, 3.0}, {a + 0.5 * width, 0.4 * width}, {b, 4.0}, {b + 3.0, 3.0}}) {
       double s = CellSpread.slopes(PLATE, C, c[0], c[1], melt);
-      // 5 Gauss-Hermite points through a kink: within 10 % of the slope scale 1/C
+      // the band taken as a straight line (CellSpread): within 10 % of the slope scale 1/C
       assertThat(s).as("dT/de at %.1f K, sd %.1f K", c[0] - a, c[1]).isCloseTo(reference(false, c[0], c[1]), within(0.1 / C));
       assertThat(melt[0]).as("dphi/de at %.1f K, sd %.1f K", c[0] - a, c[1])
           .isCloseTo(reference(true, c[0], c[1]), within(0.1 / (width * C)));
