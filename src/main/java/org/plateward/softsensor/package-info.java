@@ -6,7 +6,7 @@
  *
  * <h2>State vector ({@link org.plateward.softsensor.StateLayout}), n = 105 on the 80-cell grid</h2>
  * <ul>
- *   <li>60 plate enthalpies, scaled as e_j/C (kelvin-equivalent, so the covariance of
+ *   <li>80 plate enthalpies, scaled as e_j/C (kelvin-equivalent, so the covariance of
  *       temperatures and of the O(1) parameters stays well conditioned, PITFALLS §3.1);</li>
  *   <li>4 random-walk parameters: reforming activity, combustion activity, heat-loss
  *       coefficient, gas-wall heat-transfer multiplier (on the Nusselt number);</li>
@@ -57,6 +57,15 @@
  * stands the filter reuses Φ = (I − hJ)⁻¹ (one LU and n solves per rebuild). On the committed
  * recordings this is one rebuild per 6–8 steps.
  *
+ * <p>The Jacobian linearises T(e) and φ(e) of each cell over its spread, not at its mean
+ * (statistical linearisation, Gelb 1974; {@link org.plateward.softsensor.CellSpread}): the slope
+ * is E[T'] under the cell's Gaussian, exact for a piecewise-linear T(e). At the mean alone the
+ * slope jumps by a factor of about 60 at the band's edges, so a cell whose enthalpy may lie on
+ * either side was treated as certainly on one, and the covariance collapsed when its mean
+ * crossed an edge. With the spread slope the fuel surge's 2σ coverage inside the upset went
+ * from 76.6 to 92 % (the other recordings unchanged); a cell's slope moving by more than 25 %
+ * since the last build makes the Jacobian stale.
+ *
  * <h2>Delayed analyzer results: stochastic cloning</h2>
  * The analyzer draws a sample every 30 s and publishes it 60 s later, on that frame only (empty
  * cells in between). The first result fixes the phase of the schedule (it is counted as not
@@ -99,21 +108,35 @@
  * None of these was fitted to a recording. Judgements made after looking at results: the
  * systematic meter error (0.5 % rather than 0.25 %), kept at the accuracy class because the
  * smaller value lost coverage inside the fuel surge; the representation floors (R, above); and
- * τ of the input errors: 3600 s (a calibration offset that barely moves) was tried and lost
- * coverage inside the fuel surge (67 % against 76 %), so 300 s stays.
+ * τ of the input errors. The plant's meter errors are constant over a run (a calibration offset),
+ * so a long τ is the closer model, and it fits better: with τ = 10⁵ s (about a day) the peak RMSE falls to
+ * 1.4 / 2.7 / 2.3 / 2.9 K (analyzer outage, catalyst ageing, feed drop, fuel surge; against
+ * 2.2 / 2.4 / 4.3 / 5.0 K), the fuel surge's mean NEES to 1.40 and its time-to-exhaust within
+ * 10 % in 22 % of the scored frames (0 % now). But inside the fuel surge the filter then
+ * becomes over-confident, 2σ coverage 69 % against 92 %: after the melt-through the estimate is
+ * 4–6 K cold with σ about 2 K, an error no boundary signal shows (the NIS stays at 0.8), so it
+ * is structural, and a 300 s τ keeps enough σ to cover it. 300 s stays until that error is
+ * found; the study is rerun with {@code bench.TwinSweep -Dss.inputBiasTimeS=100000}.
  *
  * <h2>Derived quantities</h2>
  * <ul>
+ *   <li>Cell temperature σ: the spread of T(x) under the cell's Gaussian, by exact partial
+ *       moments ({@link org.plateward.softsensor.CellSpread}; on the melting plateau the
+ *       temperature barely moves with enthalpy).</li>
  *   <li>Peak temperature σ: gradient of the parabolic reconstruction with respect to the three
- *       cell temperatures (central differences), times each cell's secant slope dT/dx over ±1σ
- *       (statistical linearisation: on the melting plateau the temperature barely moves with
- *       enthalpy), applied to the 3×3 block of P.</li>
+ *       cell temperatures (central differences), times each cell's dT/dx (σ_T/σ_x), applied to
+ *       the 3×3 block of P; and at least the spread of the hottest of the three cells by Clark's
+ *       recursion ({@link org.plateward.softsensor.PeakSpread}), since a cell pinned on the
+ *       plateau and a molten neighbour of nearly the same temperature swap the argmax from one
+ *       block to the next (the gradient alone then reported 0.1 K and 20 K in turn).</li>
  *   <li>Melt fraction per cell and overall (length-weighted); its σ from the secant slope of φ
  *       over ±1σ of each cell and the full cell covariance (the plain derivative is zero
  *       outside the band). Remaining latent capacity of one plate, J.</li>
  *   <li>Time-to-exhaust ({@link org.plateward.softsensor.ExhaustForecast}): while a cell melts
  *       or the peak is within 25 K of the melting point (the demo unit runs 38 K below it), every 30 s, an open-loop forecast from
- *       the posterior mean with the present inputs and parameters held, over 1800 s; between
+ *       the posterior mean with the present inputs (each the mean of its last 30 s of usable
+ *       values: one frame's 0.5 % meter noise made successive forecasts jump by a factor of two
+ *       near the plateau) and parameters held, over 1800 s; between
  *       forecasts it counts down. Spread: two more forecasts from x ± P e_k/√P_kk, the
  *       conditional shift of the whole state when the critical cell k moves by one σ (a
  *       sigma-point pair along the direction that matters most); σ = half their difference.</li>
