@@ -24,10 +24,22 @@ final class CellSpread {
 
   private CellSpread() {}
 
+  /** Spreads further than this many σ from the band see one linear piece only (exactly). */
+  private static final double FAR_SIGMAS = 8.0;
+
   /** E[T], E[T²], E[T'] (per K of x) and E[φ'] (per K of x) for x ~ N(meanK, sdK²). */
   private static void moments(PlateEnthalpy plate, double capacity, double meanK, double sdK, double[] out) {
     double a = plate.meltStartJPerM2() / capacity;
     double b = plate.meltEndJPerM2() / capacity;
+    if (meanK + FAR_SIGMAS * sdK < a || meanK - FAR_SIGMAS * sdK > b) {
+      // one piece of slope 1 (the mass beyond 8σ, below 1e-15, is dropped): no erf needed
+      double t = plate.tempK(meanK * capacity);
+      out[0] = t;
+      out[1] = t * t + sdK * sdK;
+      out[2] = 1.0;
+      out[3] = 0.0;
+      return;
+    }
     double tLow = plate.tempK(plate.meltStartJPerM2());
     double tHigh = plate.tempK(plate.meltEndJPerM2());
     double za = (a - meanK) / sdK;

@@ -218,7 +218,11 @@ public final class ReactorDynamics implements Dynamics {
     copyHeld(dfdx);
   }
 
-  /** Relative change of a cell's spread slope dT/de that makes the held Jacobian stale. */
+  /**
+   * Change of a cell's spread slope dT/de, as a share of the sensible slope 1/C, that makes the
+   * held Jacobian stale (a relative test rebuilt it on every small change of a cell on the
+   * plateau, where the slope is about 1/60 of 1/C: 444 builds on the fuel surge, 273 now, 265 without the spread).
+   */
   static final double SLOPE_TOLERANCE = 0.25;
   /**
    * Linearise T(e) and φ(e) over each cell's spread rather than at the mean (statistical
@@ -274,7 +278,7 @@ public final class ReactorDynamics implements Dynamics {
       for (int j = 0; j < cells; j++) {
         double sl = spreadSlopes(j, x[j], null);
         double ref = refSlope[j];
-        if (Math.abs(sl - ref) > SLOPE_TOLERANCE * Math.max(Math.abs(sl), Math.abs(ref))) {
+        if (Math.abs(sl - ref) > SLOPE_TOLERANCE / capacity) {
           return true;
         }
       }
