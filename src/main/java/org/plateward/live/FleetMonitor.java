@@ -57,9 +57,9 @@ import org.slf4j.LoggerFactory;
  *
  * <p>Each unit's advisory alarms are judged on its own lane with its own configured definitions
  * ({@link AdvisoryStage#alarmsOnly}; transitions go to the unit's history and to the change
- * listeners), and its active-alarm count is published. A lane receives plain frames, in which the
- * aligner wrote a stale value as MISSING, so the Bad-or-stale rule is the recorded one ({@link
- * org.plateward.alarms.BadOrStale#recorded}). The fuel-trim advisor is not asked in a fleet: each
+ * listeners), and its active-alarm count is published. Which signals are Bad or stale is taken
+ * on the frame thread by the live rule ({@link org.plateward.alarms.BadOrStale#live}, from the
+ * aligner's stale flags) and handed to the lane with the frame's time. The fuel-trim advisor is not asked in a fleet: each
  * question costs a few forecasts, far more than an estimate, for every unit every 30 s. Operator
  * actions are taken per unit with {@code plateward watch} on that unit's own configuration.
  */
@@ -279,6 +279,14 @@ public final class FleetMonitor implements AutoCloseable {
     final UnitLane lane;
     final AdvisoryStage stage;
     volatile List<org.plateward.alarms.AlarmStatus> alarmStatuses = List.of();
+    /** Bad-or-stale signals of the frames waiting in the lane, by plant time (bounded: dropped frames age out). */
+    final java.util.Map<Instant, java.util.Set<String>> badOrStale = java.util.Collections.synchronizedMap(
+        new java.util.LinkedHashMap<>(16, 0.75f, false) {
+          @Override
+          protected boolean removeEldestEntry(java.util.Map.Entry<Instant, java.util.Set<String>> eldest) {
+            return size() > 2 * setup.laneCapacity() + 16;
+          }
+        });
     final String runId = UUID.randomUUID().toString();
     final AtomicBoolean failureShown = new AtomicBoolean();
     volatile PlantConnection connection;
@@ -323,7 +331,11 @@ public final class FleetMonitor implements AutoCloseable {
       }
       boolean lost = link != ConnectionState.CONNECTED;
       boolean notKept = history != null && history.health().state() == org.plateward.history.HistoryHealth.State.NOT_KEEPING;
-      for (org.plateward.alarms.AlarmEvent ev : stage.judge(e, org.plateward.alarms.BadOrStale.recorded(frame), lost, notKept)) {
+      java.util.Set<String> bos = badOrStale.remove(frame.time());
+      if (bos == null) {
+        bos = org.plateward.alarms.BadOrStale.recorded(frame); // not seen on the frame thread (cannot happen in order)
+      }
+      for (org.plateward.alarms.AlarmEvent ev : stage.judge(e, bos, lost, notKept)) {
         tell("unit " + id + ": alarm " + ev.alarm().key() + " [" + ev.priority().key() + "] " + ev.transition()
             + ": " + ev.message());
       }
@@ -402,6 +414,9 @@ public final class FleetMonitor implements AutoCloseable {
         return;
       }
       Frame plant = setup.clock().toPlant(f.frame());
+      if (stage.board() != null) {
+        badOrStale.put(plant.time(), org.plateward.alarms.BadOrStale.live(f.frame(), f.stale()));
+      }
       try {
         if (!lane.offer(plant) && failureShown.compareAndSet(false, true)) {
           UnitPublishing.showFailure(setup.publisher(), lane.status());
