@@ -136,6 +136,18 @@ public final class AlarmBoard {
     return act(ActionKind.RETURN_TO_SERVICE, time, who, alarm, comment, null);
   }
 
+  /**
+   * Takes an operator action of any kind (the one dispatch the monitors and the replay share).
+   *
+   * @param shelveFor how long a shelve lasts from {@code time} (ignored by the other actions;
+   *     null: no expiry, which a shelve refuses)
+   */
+  public ActionResult take(ActionKind action, Instant time, String who, AlarmKind alarm, String reason,
+      Duration shelveFor) {
+    Instant expiry = action == ActionKind.SHELVE && shelveFor != null ? time.plus(shelveFor) : null;
+    return act(action, time, who, alarm, reason, expiry);
+  }
+
   private ActionResult act(ActionKind action, Instant time, String who, AlarmKind alarm,
       String reason, Instant expiry) {
     Objects.requireNonNull(time, "time");

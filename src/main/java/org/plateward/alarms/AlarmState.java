@@ -38,6 +38,11 @@ public enum AlarmState {
     return letter;
   }
 
+  /** Whether the alarm stands: its condition is active and it is not shelved or suppressed (B, C). */
+  public boolean standing() {
+    return this == UNACKNOWLEDGED || this == ACKNOWLEDGED;
+  }
+
   /** Whether the alarm is presented to the operator (B, C, D). */
   public boolean annunciated() {
     return this == UNACKNOWLEDGED || this == ACKNOWLEDGED || this == RETURNED_UNACKNOWLEDGED;

@@ -127,8 +127,7 @@ public final class AdvisoryStage {
   public static int active(List<org.plateward.alarms.AlarmStatus> statuses) {
     int n = 0;
     for (org.plateward.alarms.AlarmStatus st : statuses) {
-      if (st.state() == org.plateward.alarms.AlarmState.UNACKNOWLEDGED
-          || st.state() == org.plateward.alarms.AlarmState.ACKNOWLEDGED) {
+      if (st.state().standing()) {
         n++;
       }
     }

@@ -35,7 +35,6 @@ import org.plateward.opcua.PlantConnection;
 import org.plateward.opcua.PlantConnectionException;
 import org.plateward.estimation.FilterSettings;
 import org.plateward.signals.Frame;
-import org.plateward.signals.Signal;
 import org.plateward.softsensor.Estimate;
 import org.plateward.softsensor.ReactorSoftSensor;
 import org.plateward.softsensor.SoftSensorSettings;
@@ -405,7 +404,7 @@ public final class FleetMonitor implements AutoCloseable {
         lastDataWall = Instant.now();
       }
       if (!dataSeen) {
-        if (!anyUsable(f.frame())) {
+        if (!f.frame().anyUsable()) {
           return; // estimation starts with the first frame that carries a usable value
         }
         dataSeen = true;
@@ -463,14 +462,5 @@ public final class FleetMonitor implements AutoCloseable {
         c.close();
       }
     }
-  }
-
-  private static boolean anyUsable(Frame f) {
-    for (Signal s : Signal.values()) {
-      if (f.usable(s)) {
-        return true;
-      }
-    }
-    return false;
   }
 }

@@ -79,9 +79,7 @@ public final class FleetTable {
     }
     org.plateward.alarms.Priority top = null;
     for (org.plateward.alarms.AlarmStatus st : u.alarms()) {
-      boolean standing = st.state() == org.plateward.alarms.AlarmState.UNACKNOWLEDGED
-          || st.state() == org.plateward.alarms.AlarmState.ACKNOWLEDGED;
-      if (standing && (top == null || st.priority().ordinal() < top.ordinal())) {
+      if (st.state().standing() && (top == null || st.priority().ordinal() < top.ordinal())) {
         top = st.priority();
       }
     }

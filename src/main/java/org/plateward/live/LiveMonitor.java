@@ -257,13 +257,7 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
       estimator.execute(() -> {
         try {
           Instant now = clock.toPlant(Instant.now());
-          org.plateward.alarms.ActionResult r = switch (action) {
-            case ACKNOWLEDGE -> alarms.acknowledge(now, who, alarm, reason);
-            case SHELVE -> alarms.shelve(now, who, alarm, reason, shelveFor == null ? null : now.plus(shelveFor));
-            case UNSHELVE -> alarms.unshelve(now, who, alarm, reason);
-            case REMOVE_FROM_SERVICE -> alarms.removeFromService(now, who, alarm, reason);
-            case RETURN_TO_SERVICE -> alarms.returnToService(now, who, alarm, reason);
-          };
+          org.plateward.alarms.ActionResult r = alarms.take(action, now, who, alarm, reason, shelveFor);
           alarmStatuses = alarms.statuses();
           if (r.accepted()) {
             tell("operator " + r.message());
@@ -333,7 +327,7 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
       lastDataWall = Instant.now();
     }
     if (!dataSeen) {
-      if (!anyUsable(f.frame())) {
+      if (!f.frame().anyUsable()) {
         return; // estimation starts with the first frame that carries a usable value
       }
       dataSeen = true;
@@ -341,15 +335,6 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
     if (!estimator.isShutdown()) {
       estimator.execute(() -> estimate(f));
     }
-  }
-
-  private static boolean anyUsable(Frame f) {
-    for (org.plateward.signals.Signal s : org.plateward.signals.Signal.values()) {
-      if (f.usable(s)) {
-        return true;
-      }
-    }
-    return false;
   }
 
   // --- estimator thread ---------------------------------------------------------------------
@@ -429,13 +414,7 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
         if (last != null && last.time().isAfter(now)) {
           now = last.time();
         }
-        ActionResult r = switch (kind) {
-          case ACKNOWLEDGE -> alarms.acknowledge(now, who, alarm, reason);
-          case SHELVE -> alarms.shelve(now, who, alarm, reason, shelveFor == null ? null : now.plus(shelveFor));
-          case UNSHELVE -> alarms.unshelve(now, who, alarm, reason);
-          case REMOVE_FROM_SERVICE -> alarms.removeFromService(now, who, alarm, reason);
-          case RETURN_TO_SERVICE -> alarms.returnToService(now, who, alarm, reason);
-        };
+        ActionResult r = alarms.take(kind, now, who, alarm, reason, shelveFor);
         alarmStatuses = alarms.statuses();
         return r;
       });

@@ -29,6 +29,16 @@ public record Frame(Instant time, double[] valuesSi, Quality[] quality) {
     return quality[s.ordinal()].usable() && Double.isFinite(valuesSi[s.ordinal()]);
   }
 
+  /** True when any signal has a usable value. */
+  public boolean anyUsable() {
+    for (Signal s : Signal.values()) {
+      if (usable(s)) {
+        return true;
+      }
+    }
+    return false;
+  }
+
   @Override
   public double[] valuesSi() {
     return valuesSi.clone();

@@ -286,13 +286,7 @@ public final class ReplayFeed implements DisplayFeed {
     actions.add(() -> {
       try {
         Instant now = headTime == null ? Timeline.instant(firstS) : headTime;
-        ActionResult r = switch (action) {
-          case ACKNOWLEDGE -> board.acknowledge(now, who, alarm, reason);
-          case SHELVE -> board.shelve(now, who, alarm, reason, shelveFor == null ? null : now.plus(shelveFor));
-          case UNSHELVE -> board.unshelve(now, who, alarm, reason);
-          case REMOVE_FROM_SERVICE -> board.removeFromService(now, who, alarm, reason);
-          case RETURN_TO_SERVICE -> board.returnToService(now, who, alarm, reason);
-        };
+        ActionResult r = board.take(action, now, who, alarm, reason, shelveFor);
         if (r.accepted() && lastSnapshot != null && sink != null) {
           // the same frame again with the statuses after the action, so the window shows it now
           Snapshot p = lastSnapshot;
