@@ -71,16 +71,10 @@ public final class ReportPlots {
     prof.writePng(WIDTH, HEIGHT, dir.resolve(FILES.get(0)));
 
     // hidden peak ± sigma
-    double[] peak = r.series(0);
-    double[] sd = r.series(1);
-    double[] pc = new double[peak.length];
-    double[] lo = new double[peak.length];
-    double[] hi = new double[peak.length];
-    for (int i = 0; i < peak.length; i++) {
-      pc[i] = peak[i] - 273.15;
-      lo[i] = pc[i] - sd[i];
-      hi[i] = pc[i] + sd[i];
-    }
+    double[][] pkBand = meanAndBand(r.series(0), r.series(1), -273.15, 1.0, Double.NEGATIVE_INFINITY);
+    double[] pc = pkBand[0];
+    double[] lo = pkBand[1];
+    double[] hi = pkBand[2];
     Chart pk = new Chart("Hidden peak plate temperature ± σ (estimate)", xLabel, "degC")
         .band(x, lo, hi, Chart.BAND, "± σ")
         .line(x, pc, Chart.DATA, "hidden peak")
@@ -108,16 +102,10 @@ public final class ReportPlots {
     mf.writePng(WIDTH, HEIGHT, dir.resolve(FILES.get(2)));
 
     // time to exhaust
-    double[] tte = r.series(5);
-    double[] tsd = r.series(6);
-    double[] tm = new double[tte.length];
-    double[] tlo = new double[tte.length];
-    double[] thi = new double[tte.length];
-    for (int i = 0; i < tte.length; i++) {
-      tm[i] = tte[i] / 60.0;
-      tlo[i] = Math.max(0.0, (tte[i] - tsd[i]) / 60.0);
-      thi[i] = (tte[i] + tsd[i]) / 60.0;
-    }
+    double[][] teBand = meanAndBand(r.series(5), r.series(6), 0.0, 1.0 / 60.0, 0.0);
+    double[] tm = teBand[0];
+    double[] tlo = teBand[1];
+    double[] thi = teBand[2];
     Chart te = new Chart("Time-to-exhaust (estimate; gaps: no melt-through forecast within the horizon)", xLabel, "min")
         .band(x, tlo, thi, Chart.BAND, "± spread")
         .line(x, tm, Chart.DATA, "time-to-exhaust")
@@ -178,5 +166,19 @@ public final class ReportPlots {
           inAlarm ? "in alarm" : "other than normal (returned unacknowledged, shelved, suppressed, out of service)");
     }
     return c;
+  }
+
+  /**
+   * A series and its ± σ band in display units, (v + offset) · scale, the band's lower edge
+   * kept at or above {@code floor}: {mean, lower, upper}.
+   */
+  private static double[][] meanAndBand(double[] v, double[] sd, double offset, double scale, double floor) {
+    double[][] out = new double[3][v.length];
+    for (int i = 0; i < v.length; i++) {
+      out[0][i] = (v[i] + offset) * scale;
+      out[1][i] = Math.max(floor, (v[i] + offset - sd[i]) * scale);
+      out[2][i] = (v[i] + offset + sd[i]) * scale;
+    }
+    return out;
   }
 }
