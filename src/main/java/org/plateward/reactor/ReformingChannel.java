@@ -12,6 +12,14 @@ import org.plateward.kinetics.XuFromentKinetics;
  * (a, b) = m_cat (r1 + r3, r2 + r3) evaluated at the cell outlet composition (stable however
  * fast the reaction), solved by a safeguarded Newton iteration that keeps every species flow
  * non-negative.
+ *
+ * <p>That balance is a stirred tank per step, first-order accurate in the step's length: on a
+ * grid refined at the front, 10 mm background cells converted 0.9771 of the methane where the
+ * converged march converts 0.9795, and the estimator answered the outlet analyzer by raising
+ * the reforming activity 4 % and put the hidden peak 3.4 K low. A cell wider than the grid's
+ * narrowest is therefore marched in equal reaction sub-steps ({@link #reactionSubSteps}), all
+ * at the cell's plate temperature; the gas-to-plate exchange stays one per cell. On a uniform
+ * grid nothing changes.
  */
 final class ReformingChannel {
   private static final int CH4 = 0;
@@ -33,6 +41,8 @@ final class ReformingChannel {
   private final double[][] constantsCache;
 
   private final double[] constantsScratch = new double[NC];
+  private final int[] subSteps;
+  private final double[] work = new double[NS];
   private final double[] x = new double[NS];
   private final double[] r = new double[3];
   private final double[] q = new double[2];
@@ -52,6 +62,7 @@ final class ReformingChannel {
     this.hydraulicDiameterM = 2.0 * g.reformingGapM();
     this.nusselt = nusselt;
     this.constantsCache = new double[cells][NC];
+    this.subSteps = reactionSubSteps(grid);
 
   }
 
@@ -84,9 +95,24 @@ final class ReformingChannel {
       double a = 0.0;
       double b = 0.0;
       if (mcat > 0.0) {
-        double[] ab = solveExtents(f, in, c, mcat, pBar);
-        a = ab[0];
-        b = ab[1];
+        int m = subSteps[j];
+        if (m == 1) {
+          double[] ab = solveExtents(f, in, c, mcat, pBar);
+          a = ab[0];
+          b = ab[1];
+        } else {
+          System.arraycopy(f, in, work, 0, NS);
+          for (int s = 0; s < m; s++) {
+            double[] ab = solveExtents(work, 0, c, mcat / m, pBar);
+            work[CH4] -= ab[0];
+            work[H2O] -= ab[0] + ab[1];
+            work[CO] += ab[0] - ab[1];
+            work[CO2] += ab[1];
+            work[H2] += 3.0 * ab[0] + ab[1];
+            a += ab[0];
+            b += ab[1];
+          }
+        }
       }
       f[o + CH4] = f[in + CH4] - a;
       f[o + H2O] = f[in + H2O] - a - b;
@@ -103,6 +129,22 @@ final class ReformingChannel {
       out.reactionHeatW[j] = q[1];
       out.heatToPlateW[j] = q[1] - q[0];
     }
+  }
+
+  /**
+   * Reaction sub-steps per cell: enough that none is wider than the grid's narrowest cell (a
+   * quarter of a width of slack), so a uniform grid keeps one per cell.
+   */
+  static int[] reactionSubSteps(Grid grid) {
+    double narrowest = Double.POSITIVE_INFINITY;
+    for (int j = 0; j < grid.cells(); j++) {
+      narrowest = Math.min(narrowest, grid.widthM(j));
+    }
+    int[] m = new int[grid.cells()];
+    for (int j = 0; j < m.length; j++) {
+      m[j] = Math.max(1, (int) Math.ceil(grid.widthM(j) / narrowest - 0.25));
+    }
+    return m;
   }
 
   private final double[] ab = new double[2];

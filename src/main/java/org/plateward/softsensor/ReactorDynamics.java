@@ -421,6 +421,14 @@ public final class ReactorDynamics implements Dynamics {
     return held;
   }
 
+  /**
+   * dT/de per cell the held Jacobian's cell columns were built with (K per J/m2): the spread
+   * slopes, or null when they were taken at the mean.
+   */
+  double[] heldPlateSlopes() {
+    return cellSdK == null ? null : refSlope.clone();
+  }
+
   double[][] heldOutputs() {
     return heldOutputs;
   }

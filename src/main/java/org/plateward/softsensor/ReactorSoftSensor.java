@@ -51,6 +51,17 @@ public final class ReactorSoftSensor {
   static final double NEAR_MELT_K = 25.0;
   /** Window of the observability diagnostic (s): ten minutes, the settling time of the plate. */
   static final double OBSERVABILITY_WINDOW_S = 600.0;
+  /**
+   * Uniform plate temperature the start's steady solve begins from (K): hot enough for the lit
+   * branch, and 158 K below the melting band. From the 1250 K of {@link SteadySummary#HOT_START_K}
+   * Newton's first steps crossed into the band, where dT/de is 60 times smaller, and stalled:
+   * with the reaction sub-steps the fuel surge's first three frames failed to start (840
+   * iterations each, most of that replay's time); from 1200 K all four recordings start in
+   * 11 to 13 Newton iterations.
+   */
+  static final double START_K = 1200.0;
+  /** Step of the diagnostic's open-loop covariance (s): ten per window ({@link ExtendedKalmanFilter#openLoopStepS}). */
+  static final double OPEN_LOOP_STEP_S = 60.0;
   /** Sub-step near the melting band (s), and how near counts (K of sensible heat). */
   static final double BAND_SUBSTEP_S = 2.5;
   static final double BAND_MARGIN_K = 5.0;
@@ -333,7 +344,7 @@ public final class ReactorSoftSensor {
     double[] u = lastGoodInput.clone();
     ModelParameters p = ModelParameters.nominal(spec).withHeatTransferMultiplier(settings.heatTransferPrior());
     double[] e = new double[cells];
-    model.uniformState(SteadySummary.HOT_START_K, e);
+    model.uniformState(START_K, e);
     e = new SteadyStateSolver(model).solve(ReactorDynamics.operatingPoint(u), p, e).enthalpyJPerM2();
     double[] x = new double[n];
     for (int j = 0; j < cells; j++) {
@@ -377,6 +388,7 @@ public final class ReactorSoftSensor {
       }
     }
     ekf = new ExtendedKalmanFilter(dynamics, processNoise(x, u, p), filterSettings, tS, x, p0);
+    ekf.openLoopStepS(OPEN_LOOP_STEP_S);
     t0S = tS;
     lastEpochS = tS;
     prevPosterior = x.clone();
@@ -837,7 +849,7 @@ public final class ReactorSoftSensor {
       System.arraycopy(jac[i], 0, jc[i], 0, cells);
     }
     double[] e0 = enthalpies(x);
-    forecast.setJacobian(jc, e0);
+    forecast.setJacobian(jc, e0, dynamics.heldPlateSlopes());
     double[] u = heldRaw();
     OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, u));
     double mean = forecast.secondsToExhaust(e0, op, dynamics.parameters(x), settings.horizonS());
@@ -876,8 +888,9 @@ public final class ReactorSoftSensor {
   }
 
   /**
-   * The inputs the estimator uses now, for what-if forecasts: the mean of each over its last
-   * {@value #HELD_INPUT_WINDOW_S} s of usable values, corrected by the estimated systematic
+   * The inputs the estimator uses now, for what-if forecasts: each one's least-squares line
+   * over its last {@value #HELD_INPUT_WINDOW_S} s of usable values at the newest frame
+   * ({@link RecentInputs#present}), corrected by the estimated systematic
    * meter errors (SI).
    */
   public OperatingPoint heldInputs() {
@@ -894,11 +907,11 @@ public final class ReactorSoftSensor {
     return sd;
   }
 
-  /** The held inputs before the meter-error correction: recent means, else the last good value. */
+  /** The held inputs before the meter-error correction: the recent lines' present values, else the last good value. */
   private double[] heldRaw() {
     double[] u = lastGoodInput.clone();
     for (int i = 0; i < u.length; i++) {
-      double m = recentInputs.mean(i);
+      double m = recentInputs.present(i);
       if (Double.isFinite(m)) {
         u[i] = m;
       }

@@ -96,7 +96,7 @@ public record SoftSensorSettings(
         new double[] {0.04, 0.04, 0.04, 0.08, 0.02},
         30.0, 60.0,
         0.005, 1.0,
-        0.005, 1.0, 300.0,
+        0.005, 1.0, 21600.0,
         2e-3,
         0.05, 0.2, 2.0,
         HEAT_TRANSFER_PRIOR, HEAT_TRANSFER_PRIOR_SD, 0.01, 600.0,

@@ -82,6 +82,15 @@ final class AdvisorView implements TimelineView {
     if (shown == null) {
       return;
     }
+    if (shown.verdict() == TrimVerdict.HELD_BACK) {
+      // no forecast was made: nothing to plot, the reason is in the text beside
+      g.setFill(Palette.TEXT);
+      g.setFont(TraceChart.TITLE);
+      g.setTextBaseline(VPos.TOP);
+      g.setTextAlign(TextAlignment.LEFT);
+      g.fillText("Advice held back: no forecast (see the reason)", 20, 20);
+      return;
+    }
     TrimOutlook hold = shown.hold();
     TrimOutlook trim = shown.trimmed();
     boolean two = shown.verdict() != TrimVerdict.NO_TRIM_NEEDED;

@@ -76,4 +76,35 @@ class OpenLoopCovarianceTest {
     }
     assertThat(updated.covariance()[0][0]).isLessThan(0.1 * open[0][0]);
   }
+
+  @Test
+  void coarseOpenLoopKeepsRandomWalksExactAndSlowModesClose() {
+    // x1 a random walk, x2 a slow first-order decay (τ = 2000 s); coarse 60 s open-loop steps
+    // against a filter that is never updated (exact sub-steps of 1 s): the walk's variance
+    // P0 + q t exactly, the slow mode within h/τ = 3 % (implicit Euler is first order; analytic
+    // P(t) = P0 e^(−2t/τ) + q τ/2 (1 − e^(−2t/τ)) = 6.158 at 600 s, measured 6.058)
+    double[][] a = {{0.0, 0.0}, {0.0, -1.0 / 2000.0}};
+    double[][] b = {{0.0}, {0.0}};
+    double[][] q = {{0.02, 0.0}, {0.0, 0.01}};
+    double[][] p0 = {{1.0, 0.0}, {0.0, 3.0}};
+    FilterSettings fs = FilterSettings.defaults().withGating(false).withMaxSubstepS(1.0);
+    ExtendedKalmanFilter coarse = new ExtendedKalmanFilter(new LinearDynamics(a, b), q, fs, 0.0,
+        new double[] {0.0, 0.0}, p0);
+    ExtendedKalmanFilter blind = new ExtendedKalmanFilter(new LinearDynamics(a, b), q, fs, 0.0,
+        new double[] {0.0, 0.0}, p0);
+    coarse.openLoopStepS(60.0);
+    coarse.restartOpenLoopCovariance();
+    LinearMeasurement h = new LinearMeasurement(new double[][] {{1.0, 1.0}});
+    for (int k = 0; k < 600; k++) {
+      coarse.propagate(new double[] {0.0}, 1.0);
+      blind.propagate(new double[] {0.0}, 1.0);
+      coarse.update(h, new double[] {0.0}, new boolean[] {true}, new double[][] {{0.1}}, new double[] {0.0});
+    }
+    double[] open = coarse.openLoopVariances();
+    assertThat(open[0]).isCloseTo(1.0 + 0.02 * 600, within(1e-9));
+    double analytic = 3.0 * Math.exp(-0.6) + 0.01 * 1000.0 * (1.0 - Math.exp(-0.6));
+    assertThat(blind.covariance()[1][1]).isCloseTo(analytic, within(1e-3 * analytic));
+    assertThat(open[1]).isCloseTo(analytic, within(0.03 * analytic));
+    assertThat(coarse.covariance()[0][0]).isLessThan(0.5 * open[0]);
+  }
 }

@@ -33,7 +33,9 @@ class DemoUnitSteadyStateTest {
   void steadyStateIsLitWithConversionAndMarginInRange() {
     SteadySummary s = SteadySummary.solve(model, spec.operatingPoint(), p);
     assertThat(s.combMethaneConversion()).as("lit").isGreaterThan(0.95);
-    assertThat(s.methaneConversion()).isBetween(0.85, 0.98);
+    // a design range, not a published figure: the fixture converts 0.981 since the reforming
+    // march takes reaction sub-steps on refined grids (0.977 before, the first-order deficit)
+    assertThat(s.methaneConversion()).isBetween(0.85, 0.99);
     double margin = spec.buffer().meltingPointK() - s.peakPlateTempK();
     assertThat(margin).as("margin to melting, K").isBetween(20.0, 80.0);
     assertThat(s.maxCellMeltFraction()).isZero();

@@ -43,6 +43,41 @@ class RecentInputsTest {
     assertThat(sd).isCloseTo(0.005 / Math.sqrt(30), within(0.1 * 0.005 / Math.sqrt(30)));
   }
 
+  @Test
+  void presentFollowsARampWithoutLag() {
+    RecentInputs r = new RecentInputs(1, 30.0, 64);
+    assertThat(r.present(0)).isNaN();
+    r.add(0, 0.0, 5.0);
+    assertThat(r.present(0)).isEqualTo(5.0); // one value: itself
+    for (int t = 1; t < 100; t++) {
+      r.add(0, t, 2.0 * t);
+    }
+    // the least-squares line through an exact ramp is the ramp: its newest value, 198
+    assertThat(r.present(0)).isCloseTo(198.0, within(1e-9));
+    // the mean lags by half the window (mean of 140..198 = 169)
+    assertThat(r.mean(0)).isCloseTo(169.0, within(1e-9));
+  }
+
+  @Test
+  void presentSpreadIsTheLeastSquaresEndPointSpread() {
+    // N = 30 equally spaced frames of white noise σ: the fitted line's value at the newest frame
+    // has variance σ² (4N − 2) / (N (N + 1)) (ordinary least squares, x at the end of the range)
+    SplittableRandom rnd = new SplittableRandom(12);
+    RecentInputs r = new RecentInputs(1, 30.0, 64);
+    double sum2 = 0.0;
+    int samples = 0;
+    for (int t = 0; t < 60_000; t++) {
+      r.add(0, t, 1.0 + 0.005 * gauss(rnd));
+      if (t >= 30 && t % 30 == 29) {
+        double d = r.present(0) - 1.0;
+        sum2 += d * d;
+        samples++;
+      }
+    }
+    double expected = 0.005 * Math.sqrt((4.0 * 30 - 2.0) / (30.0 * 31.0));
+    assertThat(Math.sqrt(sum2 / samples)).isCloseTo(expected, within(0.1 * expected));
+  }
+
   private static double gauss(SplittableRandom r) {
     double u = r.nextDouble();
     double v = r.nextDouble();
