@@ -47,11 +47,26 @@ class RecentInputsTest {
   }
 
   @Test
-  void presentSpreadIsTheLeastSquaresEndPointSpread() {
-    // N = 30 equally spaced frames of white noise σ: the fitted line's value at the newest frame
-    // has variance σ² (4N − 2) / (N (N + 1)) (ordinary least squares, x at the end of the range)
-    double expected = 0.005 * Math.sqrt((4.0 * 30 - 2.0) / (30.0 * 31.0));
-    assertThat(sampledSd(12, r -> r.present(0))).isCloseTo(expected, within(0.1 * expected));
+  void presentIsThePlateauOnceTheRampHasEnded() {
+    RecentInputs r = new RecentInputs(1, 30.0, 256);
+    for (int t = 0; t <= 200; t++) {
+      r.add(0, t, t < 100 ? 1.0 + 0.0005 * t : 1.05); // a 5 % ramp over 100 s, then held
+      if (t == 110) {
+        // 10 s into the plateau the one-window line spans the kink: between ramp and plateau
+        assertThat(r.present(0)).isBetween(1.04, 1.06);
+      }
+    }
+    // 100 s of plateau: the mean over the flat 60 s, exactly the plateau
+    assertThat(r.present(0)).isCloseTo(1.05, within(1e-12));
+  }
+
+  @Test
+  void presentOfASteadyNoisyInputIsALongMean() {
+    // N frames of white noise σ: a mean has σ/√N (0.091 % for 30, 0.046 % for 120); the line's
+    // end point σ √((4N − 2)/(N(N + 1))) (0.18 % for 30). A steady input is held by the
+    // 120-frame mean, except when a 2-standard-error trend test trips by chance (5 %)
+    double sd = sampledSd(12, r -> r.present(0));
+    assertThat(sd).isBetween(0.9 * 0.005 / Math.sqrt(120), 0.005 / Math.sqrt(30));
   }
 
   /**
@@ -60,7 +75,7 @@ class RecentInputsTest {
    */
   private static double sampledSd(long seed, java.util.function.ToDoubleFunction<RecentInputs> estimate) {
     SplittableRandom rnd = new SplittableRandom(seed);
-    RecentInputs r = new RecentInputs(1, 30.0, 64);
+    RecentInputs r = new RecentInputs(1, 30.0, 256);
     double sum2 = 0.0;
     int samples = 0;
     for (int t = 0; t < 60_000; t++) {
