@@ -42,6 +42,11 @@ public record Scenario(
     return new Scenario(name, seed, start, newDurationS, samplePeriodS, truth, sensors, events);
   }
 
+  /** The same scenario with another seed: other noise and other meter errors, the same events. */
+  public Scenario withSeed(long newSeed) {
+    return new Scenario(name, newSeed, start, durationS, samplePeriodS, truth, sensors, events);
+  }
+
   public Scenario withTruth(TruthSettings t) {
     return new Scenario(name, seed, start, durationS, samplePeriodS, t, sensors, events);
   }

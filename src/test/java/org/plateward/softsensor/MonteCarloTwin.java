@@ -1,0 +1,111 @@
+package org.plateward.softsensor;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import org.apache.commons.math3.distribution.ChiSquaredDistribution;
+import org.plateward.config.ScenarioLoader;
+import org.plateward.config.UnitConfigLoader;
+import org.plateward.estimation.FilterSettings;
+import org.plateward.plant.PlantRecorder;
+import org.plateward.plant.PlantRun;
+import org.plateward.plant.Scenario;
+import org.plateward.plant.SimulatedPlant;
+import org.plateward.reactor.UnitSpec;
+import org.plateward.replay.ReplayFrameSource;
+
+/**
+ * Twin experiments over an ensemble of plant seeds (the Monte Carlo consistency test of
+ * Bar-Shalom, Li and Kirubarajan 2001, §5.4): one scenario, its events unchanged, run with M
+ * seeds, so each run draws its own meter noise and its own accuracy-class meter errors.
+ *
+ * <p>Why: a meter's systematic error is one draw per run and the peak error follows it for
+ * the whole run, so one run's time-averaged NEES is close to a single χ²(1) sample, not the
+ * mean of thousands; whether σ is honest shows over runs. The ensemble mean of the per-run
+ * mean NEES is compared with the χ²(M)/M band (each run counted as one independent sample:
+ * the widest band, right when the error is one constant per run).
+ *
+ * <p>Study use: {@code java ... org.plateward.softsensor.MonteCarloTwin SCENARIO.toml M}.
+ */
+final class MonteCarloTwin {
+  /** One run's figures after the start-up. */
+  record Run(long seed, double meanNees, double coverage, double peakRmseK) {}
+
+  /** The ensemble's runs. */
+  record Ensemble(List<Run> runs) {
+    double meanNees() {
+      return runs.stream().mapToDouble(Run::meanNees).average().orElse(Double.NaN);
+    }
+
+    double meanCoverage() {
+      return runs.stream().mapToDouble(Run::coverage).average().orElse(Double.NaN);
+    }
+
+    /** 95 % band of the ensemble mean NEES, one χ²(1) sample per run. */
+    double[] neesBand() {
+      ChiSquaredDistribution c = new ChiSquaredDistribution(runs.size());
+      return new double[] {c.inverseCumulativeProbability(0.025) / runs.size(),
+        c.inverseCumulativeProbability(0.975) / runs.size()};
+    }
+  }
+
+  private MonteCarloTwin() {}
+
+  /**
+   * Runs the scenario with seeds {@code firstSeed .. firstSeed + m - 1}, two at a time,
+   * recording each into {@code dir}.
+   */
+  static Ensemble run(UnitSpec unit, Scenario scenario, long firstSeed, int m, Path dir) throws Exception {
+    ExecutorService pool = Executors.newFixedThreadPool(2);
+    try {
+      List<Future<Run>> out = new ArrayList<>();
+      for (int k = 0; k < m; k++) {
+        long seed = firstSeed + k;
+        out.add(pool.submit(() -> one(unit, scenario.withSeed(seed), dir)));
+      }
+      List<Run> runs = new ArrayList<>();
+      for (Future<Run> f : out) {
+        runs.add(f.get());
+      }
+      return new Ensemble(runs);
+    } finally {
+      pool.shutdownNow();
+    }
+  }
+
+  private static Run one(UnitSpec unit, Scenario s, Path dir) throws Exception {
+    SimulatedPlant plant = new SimulatedPlant(unit, s);
+    PlantRecorder recorder = new PlantRecorder();
+    PlantRun.run(plant, Double.POSITIVE_INFINITY, recorder.sink(), null);
+    Path file = dir.resolve(s.name() + "-seed" + s.seed() + ".csv");
+    recorder.write(file, s, s.name() + ".toml", unit.name());
+    ReactorSoftSensor sensor = new ReactorSoftSensor(unit, SoftSensorSettings.defaults(), FilterSettings.defaults());
+    TwinScore score = new TwinScore(600.0);
+    try (var src = ReplayFrameSource.open(file)) {
+      EstimationLoop.run(src, sensor, (f, e, truth) -> score.add(f.time().getEpochSecond(), e, truth), null);
+    }
+    Files.deleteIfExists(file);
+    return new Run(s.seed(), score.meanNees(), score.coverage(), score.peakRmseK());
+  }
+
+  public static void main(String[] args) throws Exception {
+    UnitSpec unit = UnitConfigLoader.load(Path.of("config/plateward.toml"));
+    Scenario scenario = ScenarioLoader.load(Path.of(args[0]));
+    int m = args.length > 1 ? Integer.parseInt(args[1]) : 8;
+    Path dir = Files.createTempDirectory("plateward-mc");
+    Ensemble e = run(unit, scenario, 7001, m, dir);
+    for (Run r : e.runs()) {
+      System.out.printf(Locale.ROOT, "seed %d: mean NEES %.2f, 2-sigma coverage %.1f %%, peak RMSE %.2f K%n",
+          r.seed(), r.meanNees(), 100 * r.coverage(), r.peakRmseK());
+    }
+    double[] band = e.neesBand();
+    System.out.printf(Locale.ROOT, "%s, %d seeds: ensemble mean NEES %.2f, 95%% band [%.2f, %.2f]; mean 2-sigma coverage %.1f %%%n",
+        scenario.name(), m, e.meanNees(), band[0], band[1], 100 * e.meanCoverage());
+    Files.deleteIfExists(dir);
+  }
+}
