@@ -34,7 +34,8 @@ import org.plateward.replay.ReplayFrameSource;
  */
 final class MonteCarloTwin {
   /** One run's figures after the start-up. */
-  record Run(long seed, double meanNees, double coverage, double peakRmseK) {}
+  record Run(long seed, double meanNees, double coverage, double peakRmseK, double maxCellMeltError,
+      double exhaustWithin10Pct, long exhaustFrames) {}
 
   /** The ensemble's runs. */
   record Ensemble(List<Run> runs) {
@@ -90,7 +91,8 @@ final class MonteCarloTwin {
       EstimationLoop.run(src, sensor, (f, e, truth) -> score.add(f.time().getEpochSecond(), e, truth), null);
     }
     Files.deleteIfExists(file);
-    return new Run(s.seed(), score.meanNees(), score.coverage(), score.peakRmseK());
+    return new Run(s.seed(), score.meanNees(), score.coverage(), score.peakRmseK(), score.maxCellMeltError(),
+        score.exhaustWithin10Pct(), score.exhaustFrames());
   }
 
   public static void main(String[] args) throws Exception {
@@ -100,8 +102,10 @@ final class MonteCarloTwin {
     Path dir = Files.createTempDirectory("plateward-mc");
     Ensemble e = run(unit, scenario, 7001, m, dir);
     for (Run r : e.runs()) {
-      System.out.printf(Locale.ROOT, "seed %d: mean NEES %.2f, 2-sigma coverage %.1f %%, peak RMSE %.2f K%n",
-          r.seed(), r.meanNees(), 100 * r.coverage(), r.peakRmseK());
+      System.out.printf(Locale.ROOT, "seed %d: mean NEES %.2f, 2-sigma coverage %.1f %%, peak RMSE %.2f K,"
+          + " max-cell melt error %.2f, time-to-exhaust within 10 %% in %.0f %% of %d frames%n",
+          r.seed(), r.meanNees(), 100 * r.coverage(), r.peakRmseK(), r.maxCellMeltError(),
+          100 * r.exhaustWithin10Pct(), r.exhaustFrames());
     }
     double[] band = e.neesBand();
     System.out.printf(Locale.ROOT, "%s, %d seeds: ensemble mean NEES %.2f, 95%% band [%.2f, %.2f]; mean 2-sigma coverage %.1f %%%n",
