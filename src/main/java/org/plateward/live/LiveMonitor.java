@@ -234,7 +234,8 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
 
   /**
    * Takes one operator action on an advisory alarm, on the estimator thread (the alarm board's
-   * owner), timed at plant time now; the board writes the audit trail (history, when kept).
+   * owner), timed at plant time now but never before the last estimate, as on the console;
+   * the board writes the audit trail (history, when kept).
    *
    * @param action what to do
    * @param who the operator
@@ -256,9 +257,7 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
     try {
       estimator.execute(() -> {
         try {
-          Instant now = clock.toPlant(Instant.now());
-          org.plateward.alarms.ActionResult r = alarms.take(action, now, who, alarm, reason, shelveFor);
-          alarmStatuses = alarms.statuses();
+          org.plateward.alarms.ActionResult r = takeNow(action, who, alarm, reason, shelveFor);
           if (r.accepted()) {
             tell("operator " + r.message());
           }
@@ -271,6 +270,21 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
       f.completeExceptionally(new IllegalStateException("the monitor is closed or its estimator is behind", ex));
     }
     return f;
+  }
+
+  /**
+   * One operator action on the estimator thread, timed at plant time now but never before the
+   * last estimate (the board has judged up to it; the plant clock may trail it by a frame).
+   */
+  private ActionResult takeNow(ActionKind kind, String who, AlarmKind alarm, String reason, Duration shelveFor) {
+    Instant now = clock.toPlant(Instant.now());
+    Estimate last = latest;
+    if (last != null && last.time().isAfter(now)) {
+      now = last.time();
+    }
+    ActionResult r = alarms.take(kind, now, who, alarm, reason, shelveFor);
+    alarmStatuses = alarms.statuses();
+    return r;
   }
 
   /** A consistent look at the monitor now. */
@@ -408,16 +422,7 @@ public final class LiveMonitor implements AutoCloseable, AlarmActions {
     }
     Future<ActionResult> f;
     try {
-      f = estimator.submit(() -> {
-        Instant now = clock.toPlant(Instant.now());
-        Estimate last = latest;
-        if (last != null && last.time().isAfter(now)) {
-          now = last.time();
-        }
-        ActionResult r = alarms.take(kind, now, who, alarm, reason, shelveFor);
-        alarmStatuses = alarms.statuses();
-        return r;
-      });
+      f = estimator.submit(() -> takeNow(kind, who, alarm, reason, shelveFor));
     } catch (java.util.concurrent.RejectedExecutionException ex) {
       return new ActionResult(false, "the monitor is stopping or busy; try again", null, List.of());
     }

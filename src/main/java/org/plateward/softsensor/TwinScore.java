@@ -53,6 +53,7 @@ public final class TwinScore {
   private final List<Double> frameTimes = new ArrayList<>();
   private final List<double[]> frameFlows = new ArrayList<>();
   private final List<double[]> tteCandidates = new ArrayList<>();
+  private long tteInside2Sd;
   private boolean tteSettled = true;
   private long tteScored;
   private long tteWithin;
@@ -181,7 +182,7 @@ public final class TwinScore {
     frameFlows.add(flows);
     Double tte = truth.get(TTE);
     if (tte != null && tte >= 60.0 && tte <= 600.0) {
-      tteCandidates.add(new double[] {frameTimes.size() - 1, tte, e.timeToExhaustS()});
+      tteCandidates.add(new double[] {frameTimes.size() - 1, tte, e.timeToExhaustS(), e.timeToExhaustSdS()});
       tteSettled = false;
     }
   }
@@ -197,6 +198,7 @@ public final class TwinScore {
     }
     tteScored = 0;
     tteWithin = 0;
+    tteInside2Sd = 0;
     tteWorstRel = 0.0;
     for (double[] c : tteCandidates) {
       int k = (int) c[0];
@@ -217,6 +219,10 @@ public final class TwinScore {
         continue;
       }
       tteScored++;
+      double sd = c[3];
+      if (Double.isFinite(est) && sd > 0.0 && Math.abs(est - tte) <= 2.0 * sd) {
+        tteInside2Sd++;
+      }
       double rel = Double.isFinite(est) ? Math.abs(est - tte) / tte : Double.POSITIVE_INFINITY;
       tteWorstRel = Math.max(tteWorstRel, rel);
       if (rel <= 0.1) {
@@ -312,6 +318,12 @@ public final class TwinScore {
     return tteScored == 0 ? Double.NaN : (double) tteWithin / tteScored;
   }
 
+  /** Fraction of those where the truth lies within ±2σ of the forecast (its stated spread). */
+  public double exhaustInside2Sd() {
+    settleExhaust();
+    return tteScored == 0 ? Double.NaN : (double) tteInside2Sd / tteScored;
+  }
+
   /** Worst relative time-to-exhaust error over those frames. */
   public double exhaustWorstRelError() {
     settleExhaust();
@@ -337,9 +349,9 @@ public final class TwinScore {
     settleExhaust();
     if (!tteCandidates.isEmpty()) {
       sb.append(String.format(Locale.ROOT,
-          "  time-to-exhaust (truth 60-600 s, flows held until then): %.1f %% of %d frames within 10 %%, worst %.0f %%"
-              + " (%d frames with the flows still moving not scored)%n",
-          100 * exhaustWithin10Pct(), tteScored, 100 * tteWorstRel, tteCandidates.size() - tteScored));
+          "  time-to-exhaust (truth 60-600 s, flows held until then): %.1f %% of %d frames within 10 %%, worst %.0f %%,"
+              + " truth within its ±2σ in %.1f %% (%d frames with the flows still moving not scored)%n",
+          100 * exhaustWithin10Pct(), tteScored, 100 * tteWorstRel, 100 * exhaustInside2Sd(), tteCandidates.size() - tteScored));
     }
     return sb.toString();
   }

@@ -57,9 +57,10 @@ class ScenarioChecksTest {
 
   @Test
   void timeToFirstFullMeltLiesInsideItsForecastSpread() {
-    // Issue 4 asks for 10 %: NOT met (measured at commit: median error 36 %, 10 % of the frames
-    // within 17 %; the estimate runs 3-4 K cold before the melt with the recording's meter
-    // errors, so the forecast comes late); the issue stays open for it. Asserted: the truth lies
+    // Issue 4 asks for 10 %: NOT met (measured at commit: 58 % of the 138 frames TwinScore scores
+    // within 10 %, worst 32 %; over eight other plant seeds 0-82 %, since the melt-through time
+    // moves some 15 % per 0.25 % of fuel and the meters' systematic errors are only partly
+    // learnt); the issue stays open for it. Asserted: the truth lies
     // inside the forecast's own ±2σ in at least 95 % of the frames (its spread is honest), and
     // every frame is forecast (a number, not "none within the horizon").
     // fuel-surge.toml: +6 % fuel from 20 min (2 min ramp) for 20 min; the forecast holds the
@@ -93,5 +94,7 @@ class ScenarioChecksTest {
         outside.size(), outside.size() > 8 ? outside.subList(0, 8) + " ..." : outside);
     assertThat(n).isGreaterThan(60);
     assertThat(outside.size()).isLessThanOrEqualTo(n / 20);
+    // the summary's own count (its frames: flows held until the melt-through) agrees
+    assertThat(run.score.exhaustInside2Sd()).isGreaterThanOrEqualTo(0.95);
   }
 }
