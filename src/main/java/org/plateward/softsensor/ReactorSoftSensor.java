@@ -127,6 +127,14 @@ public final class ReactorSoftSensor {
   private double tteS = Double.POSITIVE_INFINITY;
   private double tteSdS = Double.NaN;
   private double tteAtS = Double.NaN;
+  /** Held inputs of the last time-to-exhaust forecast (null before one). */
+  private double[] tteHeld;
+  /**
+   * A held flow that moved by more than this since the last forecast brings the next one
+   * forward (relative): near melt-through 0.25 % of fuel moves the forecast by some 15 %, and a
+   * forecast taken inside a ramp otherwise stood for the full {@code forecast_every}.
+   */
+  static final double HELD_FLOW_MOVE = 0.0025;
   private long blocks;
   private long droppedAnalyzer;
   private long heldInputBlocks;
@@ -840,9 +848,11 @@ public final class ReactorSoftSensor {
       tteAtS = Double.NaN;
       return;
     }
-    if (!Double.isNaN(tteAtS) && tS - tteAtS < settings.forecastEveryS() - 1e-6) {
+    double[] held = heldRaw();
+    if (!Double.isNaN(tteAtS) && tS - tteAtS < settings.forecastEveryS() - 1e-6 && !heldMoved(held)) {
       return;
     }
+    tteHeld = held;
     double[][] jac = dynamics.heldJacobian();
     double[][] jc = new double[cells][cells];
     for (int i = 0; i < cells; i++) {
@@ -850,7 +860,7 @@ public final class ReactorSoftSensor {
     }
     double[] e0 = enthalpies(x);
     forecast.setJacobian(jc, e0, dynamics.heldPlateSlopes());
-    double[] u = heldRaw();
+    double[] u = held;
     OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, u));
     double mean = forecast.secondsToExhaust(e0, op, dynamics.parameters(x), settings.horizonS());
     if (!Double.isFinite(mean)) {
@@ -905,6 +915,19 @@ public final class ReactorSoftSensor {
       sd[j] = Math.sqrt(Math.max(ekf.covarianceEntry(j, j), 0.0));
     }
     return sd;
+  }
+
+  /** Whether a held flow moved by more than {@link #HELD_FLOW_MOVE} since the last forecast. */
+  private boolean heldMoved(double[] held) {
+    if (tteHeld == null) {
+      return true;
+    }
+    for (int i : new int[] {0, 1, 4, 5}) { // reforming gas, steam, fuel, air
+      if (Math.abs(held[i] - tteHeld[i]) > HELD_FLOW_MOVE * Math.abs(tteHeld[i])) {
+        return true;
+      }
+    }
+    return false;
   }
 
   /** The held inputs before the meter-error correction: the recent lines' present values, else the last good value. */

@@ -147,11 +147,13 @@
  *       over ±1σ of each cell and the full cell covariance (the plain derivative is zero
  *       outside the band). Remaining latent capacity of one plate, J.</li>
  *   <li>Time-to-exhaust ({@link org.plateward.softsensor.ExhaustForecast}): while a cell melts
- *       or the peak is within 25 K of the melting point (the demo unit runs 38 K below it), every 30 s, an open-loop forecast from
- *       the posterior mean with the present inputs (each the mean of its last 30 s of usable
- *       values: one frame's 0.5 % meter noise made successive forecasts jump by a factor of two
- *       near the plateau) and parameters held, over 1800 s; between
- *       forecasts it counts down. Spread: two more forecasts from x ± P e_k/√P_kk, the
+ *       or the peak is within 25 K of the melting point (the demo unit runs 38 K below it), every 30 s
+ *       (sooner when a held flow moved by more than 0.25 %), an open-loop forecast from the
+ *       posterior mean with the present inputs ({@link org.plateward.softsensor.RecentInputs}:
+ *       the mean over the longest flat stretch of up to 120 s, the 30 s least-squares line while
+ *       an input moves; one frame's 0.5 % meter noise made successive forecasts jump by a factor
+ *       of two near the plateau) and parameters held, over 1800 s; between forecasts it counts
+ *       down. Spread: two more forecasts from x ± P e_k/√P_kk, the
  *       conditional shift of the whole state when the critical cell k moves by one σ (a
  *       sigma-point pair along the direction that matters most); σ = half their difference.</li>
  * </ul>
