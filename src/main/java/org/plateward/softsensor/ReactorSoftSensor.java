@@ -135,6 +135,8 @@ public final class ReactorSoftSensor {
    * forecast taken inside a ramp otherwise stood for the full {@code forecast_every}.
    */
   static final double HELD_FLOW_MOVE = 0.0025;
+  /** The four flows among {@link #INPUTS}: reforming gas, steam, fuel, air. */
+  static final int[] HELD_FLOWS = {0, 1, 4, 5};
   private long blocks;
   private long droppedAnalyzer;
   private long heldInputBlocks;
@@ -860,8 +862,7 @@ public final class ReactorSoftSensor {
     }
     double[] e0 = enthalpies(x);
     forecast.setJacobian(jc, e0, dynamics.heldPlateSlopes());
-    double[] u = held;
-    OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, u));
+    OperatingPoint op = ReactorDynamics.operatingPoint(dynamics.correctedInputs(x, held));
     double mean = forecast.secondsToExhaust(e0, op, dynamics.parameters(x), settings.horizonS());
     if (!Double.isFinite(mean)) {
       // no melt-through within the horizon: none is reported, so no spread either (the pair
@@ -884,9 +885,9 @@ public final class ReactorSoftSensor {
       xm[i] -= v[i];
     }
     double tp = forecast.secondsToExhaust(enthalpies(xp),
-        ReactorDynamics.operatingPoint(dynamics.correctedInputs(xp, u)), dynamics.parameters(xp), settings.horizonS());
+        ReactorDynamics.operatingPoint(dynamics.correctedInputs(xp, held)), dynamics.parameters(xp), settings.horizonS());
     double tm = forecast.secondsToExhaust(enthalpies(xm),
-        ReactorDynamics.operatingPoint(dynamics.correctedInputs(xm, u)), dynamics.parameters(xm), settings.horizonS());
+        ReactorDynamics.operatingPoint(dynamics.correctedInputs(xm, held)), dynamics.parameters(xm), settings.horizonS());
     tteS = mean;
     tteAtS = tS;
     if (Double.isFinite(tp) && Double.isFinite(tm)) {
@@ -898,10 +899,10 @@ public final class ReactorSoftSensor {
   }
 
   /**
-   * The inputs the estimator uses now, for what-if forecasts: each one's least-squares line
-   * over its last {@value #HELD_INPUT_WINDOW_S} s of usable values at the newest frame
-   * ({@link RecentInputs#present}), corrected by the estimated systematic
-   * meter errors (SI).
+   * The inputs the estimator uses now, for what-if forecasts: each one's present value from its
+   * recent usable values ({@link RecentInputs#present}: the mean over the longest flat stretch
+   * of up to four {@value #HELD_INPUT_WINDOW_S} s windows, else the least-squares line over one
+   * at the newest frame), corrected by the estimated systematic meter errors (SI).
    */
   public OperatingPoint heldInputs() {
     double[] u = heldRaw();
@@ -922,7 +923,7 @@ public final class ReactorSoftSensor {
     if (tteHeld == null) {
       return true;
     }
-    for (int i : new int[] {0, 1, 4, 5}) { // reforming gas, steam, fuel, air
+    for (int i : HELD_FLOWS) {
       if (Math.abs(held[i] - tteHeld[i]) > HELD_FLOW_MOVE * Math.abs(tteHeld[i])) {
         return true;
       }
@@ -930,7 +931,7 @@ public final class ReactorSoftSensor {
     return false;
   }
 
-  /** The held inputs before the meter-error correction: the recent lines' present values, else the last good value. */
+  /** The held inputs before the meter-error correction: the present values, else the last good value. */
   private double[] heldRaw() {
     double[] u = lastGoodInput.clone();
     for (int i = 0; i < u.length; i++) {

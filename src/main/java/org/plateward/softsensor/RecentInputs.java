@@ -55,18 +55,8 @@ final class RecentInputs {
    * signal that went silent keeps the mean of its last window), or NaN before any value.
    */
   double mean(int i) {
-    return meanOver(i, windowS);
-  }
-
-  private double meanOver(int i, double spanS) {
-    double[] sum = new double[2];
-    if (!window(i, spanS, (dt, v) -> {
-      sum[0] += v;
-      sum[1]++;
-    })) {
-      return Double.NaN;
-    }
-    return sum[0] / sum[1];
+    Stretch w = window(i, windowS);
+    return w == null ? Double.NaN : w.mean();
   }
 
   /**
@@ -78,20 +68,20 @@ final class RecentInputs {
   double present(int i) {
     for (int k = LONGEST; k >= 1; k /= 2) {
       double spanS = k * windowS;
-      SimpleRegression line = new SimpleRegression();
-      if (!window(i, spanS, line::addData)) {
+      Stretch w = window(i, spanS);
+      if (w == null) {
         return Double.NaN;
       }
-      if (line.getN() < 3) {
+      if (w.line.getN() < 3) {
         return mean(i);
       }
-      boolean flat = Math.abs(line.getSlope()) <= 2.0 * line.getSlopeStdErr();
+      boolean flat = Math.abs(w.line.getSlope()) <= 2.0 * w.line.getSlopeStdErr();
       if (k == 1) {
         // time from the newest frame: the intercept is the line at the newest time
-        return flat ? meanOver(i, spanS) : line.getIntercept();
+        return flat ? w.mean() : w.line.getIntercept();
       }
-      if (flat && span(i, spanS) >= 0.9 * spanS) {
-        return meanOver(i, spanS);
+      if (flat && w.spanS() >= 0.9 * spanS) {
+        return w.mean();
       }
     }
     throw new AssertionError("the loop ends at one window");
@@ -100,26 +90,35 @@ final class RecentInputs {
   /** How many windows back {@link #present} looks for a flat stretch. */
   private static final int LONGEST = 4;
 
-  /** Time from the oldest value within {@code spanS} to the newest, plus one frame gap. */
-  private double span(int i, double spanS) {
-    double[] oldest = {0.0};
-    int[] n = {0};
-    window(i, spanS, (dt, v) -> {
-      oldest[0] = Math.min(oldest[0], dt);
-      n[0]++;
-    });
-    return n[0] < 2 ? 0.0 : -oldest[0] * n[0] / (n[0] - 1);
-  }
+  /** The values of one window, gathered in one pass: their line, sum and oldest time. */
+  private static final class Stretch {
+    final SimpleRegression line = new SimpleRegression();
+    double sum;
+    double oldestS;
 
-  private interface Sink {
-    void accept(double dtS, double value);
-  }
-
-  /** Hands (time from the newest, value) of each value in the window; false if there is none. */
-  private boolean window(int i, double spanS, Sink sink) {
-    if (count[i] == 0) {
-      return false;
+    void add(double dtS, double v) {
+      line.addData(dtS, v);
+      sum += v;
+      oldestS = Math.min(oldestS, dtS);
     }
+
+    double mean() {
+      return sum / line.getN();
+    }
+
+    /** Time from the oldest value to the newest, plus one frame gap. */
+    double spanS() {
+      long n = line.getN();
+      return n < 2 ? 0.0 : -oldestS * n / (n - 1);
+    }
+  }
+
+  /** The values within {@code spanS} of the newest (time from the newest), or null if there is none. */
+  private Stretch window(int i, double spanS) {
+    if (count[i] == 0) {
+      return null;
+    }
+    Stretch w = new Stretch();
     int newest = (next[i] - 1 + capacity) % capacity;
     double tNew = times[i][newest];
     for (int k = 0; k < count[i]; k++) {
@@ -127,8 +126,8 @@ final class RecentInputs {
       if (tNew - times[i][idx] >= spanS) {
         break;
       }
-      sink.accept(times[i][idx] - tNew, values[i][idx]);
+      w.add(times[i][idx] - tNew, values[i][idx]);
     }
-    return true;
+    return w;
   }
 }

@@ -47,7 +47,7 @@ public final class TwinScore {
   private long nisDof;
   private long nisCount;
   /** Inputs that must stay put for a held-input forecast to be scored: the four flows. */
-  private static final int[] HELD = {0, 1, 4, 5};
+  private static final int[] HELD = ReactorSoftSensor.HELD_FLOWS;
   /** Relative band the true flows must stay in (0.5 %, a tenth of the smallest upset). */
   static final double HELD_TOLERANCE = 0.005;
   private final List<Double> frameTimes = new ArrayList<>();
