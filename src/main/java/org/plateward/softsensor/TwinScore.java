@@ -35,6 +35,7 @@ public final class TwinScore {
 
   private long scored;
   private double sumSq;
+  private double sumErr;
   private double maxErr;
   private double maxErrAtS = Double.NaN;
   private double maxCellMeltErrAtS = Double.NaN;
@@ -131,6 +132,7 @@ public final class TwinScore {
     double sd = e.peakPlateTempSdK();
     scored++;
     sumSq += err * err;
+    sumErr += err;
     if (Math.abs(err) > maxErr) {
       maxErr = Math.abs(err);
       maxErrAtS = tS - t0;
@@ -253,6 +255,11 @@ public final class TwinScore {
   /** Time of the largest max-cell melt error from the first frame (s). */
   public double maxCellMeltErrorAtS() {
     return maxCellMeltErrAtS;
+  }
+
+  /** Mean signed error of the peak (estimate − truth), K: the part of the RMSE that is bias. */
+  public double peakBiasK() {
+    return scored == 0 ? Double.NaN : sumErr / scored;
   }
 
   public double peakRmseK() {

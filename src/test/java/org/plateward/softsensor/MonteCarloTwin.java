@@ -30,11 +30,14 @@ import org.plateward.replay.ReplayFrameSource;
  * mean NEES is compared with the χ²(M)/M band (each run counted as one independent sample:
  * the widest band, right when the error is one constant per run).
  *
- * <p>Study use: {@code java ... org.plateward.softsensor.MonteCarloTwin SCENARIO.toml M}.
+ * <p>Study use: {@code java ... org.plateward.softsensor.MonteCarloTwin SCENARIO.toml M}, with
+ * {@code -Dconfig=FILE} another unit configuration (a grid study), {@code -DfirstSeed=N}
+ * (default 7001), and {@code -DperfectMeters=true} the same plant with no systematic meter
+ * errors (what perfect calibration alone would buy).
  */
 final class MonteCarloTwin {
   /** One run's figures after the start-up. */
-  record Run(long seed, double meanNees, double coverage, double peakRmseK, double maxCellMeltError,
+  record Run(long seed, double meanNees, double coverage, double peakRmseK, double peakBiasK, double maxCellMeltError,
       double exhaustWithin10Pct, long exhaustFrames) {}
 
   /** The ensemble's runs. */
@@ -91,25 +94,34 @@ final class MonteCarloTwin {
       EstimationLoop.run(src, sensor, (f, e, truth) -> score.add(f.time().getEpochSecond(), e, truth), null);
     }
     Files.deleteIfExists(file);
-    return new Run(s.seed(), score.meanNees(), score.coverage(), score.peakRmseK(), score.maxCellMeltError(),
+    return new Run(s.seed(), score.meanNees(), score.coverage(), score.peakRmseK(), score.peakBiasK(), score.maxCellMeltError(),
         score.exhaustWithin10Pct(), score.exhaustFrames());
   }
 
   public static void main(String[] args) throws Exception {
-    UnitSpec unit = UnitConfigLoader.load(Path.of("config/plateward.toml"));
+    UnitSpec unit = UnitConfigLoader.load(Path.of(System.getProperty("config", "config/plateward.toml")));
     Scenario scenario = ScenarioLoader.load(Path.of(args[0]));
+    if (Boolean.getBoolean("perfectMeters")) { // study: the same plant with calibrated meters
+      scenario = new Scenario(scenario.name(), scenario.seed(), scenario.start(), scenario.durationS(),
+          scenario.samplePeriodS(), scenario.truth(), scenario.sensors().withoutSystematicErrors(), scenario.events());
+    }
     int m = args.length > 1 ? Integer.parseInt(args[1]) : 8;
     Path dir = Files.createTempDirectory("plateward-mc");
-    Ensemble e = run(unit, scenario, 7001, m, dir);
+    Ensemble e = run(unit, scenario, Long.getLong("firstSeed", 7001), m, dir);
     for (Run r : e.runs()) {
-      System.out.printf(Locale.ROOT, "seed %d: mean NEES %.2f, 2-sigma coverage %.1f %%, peak RMSE %.2f K,"
+      System.out.printf(Locale.ROOT, "seed %d: mean NEES %.2f, 2-sigma coverage %.1f %%, peak RMSE %.2f K (bias %+.2f K),"
           + " max-cell melt error %.2f, time-to-exhaust within 10 %% in %.0f %% of %d frames%n",
-          r.seed(), r.meanNees(), 100 * r.coverage(), r.peakRmseK(), r.maxCellMeltError(),
+          r.seed(), r.meanNees(), 100 * r.coverage(), r.peakRmseK(), r.peakBiasK(), r.maxCellMeltError(),
           100 * r.exhaustWithin10Pct(), r.exhaustFrames());
     }
     double[] band = e.neesBand();
     System.out.printf(Locale.ROOT, "%s, %d seeds: ensemble mean NEES %.2f, 95%% band [%.2f, %.2f]; mean 2-sigma coverage %.1f %%%n",
         scenario.name(), m, e.meanNees(), band[0], band[1], 100 * e.meanCoverage());
+    System.out.printf(Locale.ROOT, "  mean peak RMSE %.2f K, mean bias %+.2f K; max-cell melt error mean %.2f, within 0.2 in %d of %d seeds%n",
+        e.runs().stream().mapToDouble(Run::peakRmseK).average().orElse(Double.NaN),
+        e.runs().stream().mapToDouble(Run::peakBiasK).average().orElse(Double.NaN),
+        e.runs().stream().mapToDouble(Run::maxCellMeltError).average().orElse(Double.NaN),
+        e.runs().stream().filter(r -> r.maxCellMeltError() <= 0.2).count(), m);
     Files.deleteIfExists(dir);
   }
 }
