@@ -36,6 +36,7 @@ public final class TwinScore {
   private long scored;
   private double sumSq;
   private double sumErr;
+  private final List<Double> tteSignedRel = new ArrayList<>();
   private double maxErr;
   private double maxErrAtS = Double.NaN;
   private double maxCellMeltErrAtS = Double.NaN;
@@ -202,6 +203,7 @@ public final class TwinScore {
     tteWithin = 0;
     tteInside2Sd = 0;
     tteWorstRel = 0.0;
+    tteSignedRel.clear();
     for (double[] c : tteCandidates) {
       int k = (int) c[0];
       double tte = c[1];
@@ -227,6 +229,9 @@ public final class TwinScore {
       }
       double rel = Double.isFinite(est) ? Math.abs(est - tte) / tte : Double.POSITIVE_INFINITY;
       tteWorstRel = Math.max(tteWorstRel, rel);
+      if (Double.isFinite(est)) {
+        tteSignedRel.add((est - tte) / tte);
+      }
       if (rel <= 0.1) {
         tteWithin++;
       }
@@ -329,6 +334,20 @@ public final class TwinScore {
   public double exhaustInside2Sd() {
     settleExhaust();
     return tteScored == 0 ? Double.NaN : (double) tteInside2Sd / tteScored;
+  }
+
+  /**
+   * Median signed relative time-to-exhaust error over those frames (positive: the forecast
+   * melts through later than the plant), NaN if none had a forecast: a bias shows here, where
+   * the within-10 % share mixes bias and spread.
+   */
+  public double exhaustMedianSignedRelError() {
+    settleExhaust();
+    if (tteSignedRel.isEmpty()) {
+      return Double.NaN;
+    }
+    return new org.apache.commons.math3.stat.descriptive.rank.Median()
+        .evaluate(tteSignedRel.stream().mapToDouble(Double::doubleValue).toArray());
   }
 
   /** Worst relative time-to-exhaust error over those frames. */

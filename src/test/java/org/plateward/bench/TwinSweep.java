@@ -20,7 +20,7 @@ import org.plateward.softsensor.TwinScore;
  * Twin experiments on every committed recording with tuning overrides, for studying the
  * estimator (not a test): {@code -Dss.<component>=value} overrides a {@link SoftSensorSettings}
  * component and {@code -Dfs.<component>=value} a {@link FilterSettings} one (numbers and
- * booleans; arrays as comma lists). Prints each recording's {@link TwinScore} summary. Arguments
+ * booleans; arrays as comma lists), {@code -Ddata=DIR} reads the recordings from another folder. Prints each recording's {@link TwinScore} summary. Arguments
  * name the recordings (default: all four).
  */
 public final class TwinSweep {
@@ -45,7 +45,7 @@ public final class TwinSweep {
           dump.println("t\ttruePeakC\testPeakC\tsdK\ttrueMaxMelt\testMaxMelt\ttrueTte\testTte\ttteSd\tnis\tstatus\tkr\tkc\thl\thtm\terrGas\terrSteam\terrRefT\terrFuel\terrAir\terrCombT");
         }
         long[] t0 = {Long.MIN_VALUE};
-        try (var src = ReplayFrameSource.open(Path.of("replay-data", rec + ".csv"))) {
+        try (var src = ReplayFrameSource.open(Path.of(System.getProperty("data", "replay-data"), rec + ".csv"))) {
           var stats = EstimationLoop.run(src, sensor,
               (f, e, truth) -> {
                 score.add(f.time().getEpochSecond(), e, truth);
@@ -87,7 +87,7 @@ public final class TwinSweep {
   }
 
   @SuppressWarnings("unchecked")
-  static <R extends Record> R override(R base, String prefix) throws Exception {
+  public static <R extends Record> R override(R base, String prefix) throws Exception {
     RecordComponent[] comps = base.getClass().getRecordComponents();
     Object[] values = new Object[comps.length];
     Class<?>[] types = new Class<?>[comps.length];

@@ -33,12 +33,14 @@ import org.plateward.replay.ReplayFrameSource;
  * <p>Study use: {@code java ... org.plateward.softsensor.MonteCarloTwin SCENARIO.toml M}, with
  * {@code -Dconfig=FILE} another unit configuration (a grid study), {@code -DfirstSeed=N}
  * (default 7001), and {@code -DperfectMeters=true} the same plant with no systematic meter
- * errors (what perfect calibration alone would buy).
+ * errors (what perfect calibration alone would buy); {@code -Dss.X=v} and {@code -Dfs.X=v} override
+ * tuning as in {@code bench.TwinSweep}; {@code -Dkeep=DIR} keeps each run's recording
+ * there (for {@code TwinSweep -Ddata=DIR}).
  */
 final class MonteCarloTwin {
   /** One run's figures after the start-up. */
   record Run(long seed, double meanNees, double coverage, double peakRmseK, double peakBiasK, double maxCellMeltError,
-      double exhaustWithin10Pct, long exhaustFrames) {}
+      double exhaustWithin10Pct, long exhaustFrames, double exhaustMedianRelError) {}
 
   /** The ensemble's runs. */
   record Ensemble(List<Run> runs) {
@@ -88,14 +90,21 @@ final class MonteCarloTwin {
     PlantRun.run(plant, Double.POSITIVE_INFINITY, recorder.sink(), null);
     Path file = dir.resolve(s.name() + "-seed" + s.seed() + ".csv");
     recorder.write(file, s, s.name() + ".toml", unit.name());
-    ReactorSoftSensor sensor = new ReactorSoftSensor(unit, SoftSensorSettings.defaults(), FilterSettings.defaults());
+    ReactorSoftSensor sensor = new ReactorSoftSensor(unit,
+        org.plateward.bench.TwinSweep.override(SoftSensorSettings.defaults(), "ss."),
+        org.plateward.bench.TwinSweep.override(FilterSettings.defaults(), "fs."));
     TwinScore score = new TwinScore(600.0);
     try (var src = ReplayFrameSource.open(file)) {
       EstimationLoop.run(src, sensor, (f, e, truth) -> score.add(f.time().getEpochSecond(), e, truth), null);
     }
-    Files.deleteIfExists(file);
+    if (System.getProperty("keep") == null) {
+      Files.deleteIfExists(file);
+    } else {
+      Files.move(file, Path.of(System.getProperty("keep")).resolve(file.getFileName()),
+          java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+    }
     return new Run(s.seed(), score.meanNees(), score.coverage(), score.peakRmseK(), score.peakBiasK(), score.maxCellMeltError(),
-        score.exhaustWithin10Pct(), score.exhaustFrames());
+        score.exhaustWithin10Pct(), score.exhaustFrames(), score.exhaustMedianSignedRelError());
   }
 
   public static void main(String[] args) throws Exception {
@@ -110,9 +119,9 @@ final class MonteCarloTwin {
     Ensemble e = run(unit, scenario, Long.getLong("firstSeed", 7001), m, dir);
     for (Run r : e.runs()) {
       System.out.printf(Locale.ROOT, "seed %d: mean NEES %.2f, 2-sigma coverage %.1f %%, peak RMSE %.2f K (bias %+.2f K),"
-          + " max-cell melt error %.2f, time-to-exhaust within 10 %% in %.0f %% of %d frames%n",
+          + " max-cell melt error %.2f, time-to-exhaust within 10 %% in %.0f %% of %d frames (median error %+.0f %%)%n",
           r.seed(), r.meanNees(), 100 * r.coverage(), r.peakRmseK(), r.peakBiasK(), r.maxCellMeltError(),
-          100 * r.exhaustWithin10Pct(), r.exhaustFrames());
+          100 * r.exhaustWithin10Pct(), r.exhaustFrames(), 100 * r.exhaustMedianRelError());
     }
     double[] band = e.neesBand();
     System.out.printf(Locale.ROOT, "%s, %d seeds: ensemble mean NEES %.2f, 95%% band [%.2f, %.2f]; mean 2-sigma coverage %.1f %%%n",
