@@ -363,7 +363,8 @@ public final class TwinScore {
     double[] ib = nisBand();
     sb.append(String.format(Locale.ROOT, "accuracy against simulation truth (after %.0f min start-up, %d frames):%n",
         startupS / 60.0, scored));
-    sb.append(String.format(Locale.ROOT, "  peak plate temperature  RMSE %.2f K, max error %.2f K (at %.0f s)%n", peakRmseK(), peakMaxErrorK(), maxErrAtS));
+    sb.append(String.format(Locale.ROOT, "  peak plate temperature  RMSE %.2f K (mean error %+.2f K), max error %.2f K (at %.0f s)%n",
+        peakRmseK(), peakBiasK(), peakMaxErrorK(), maxErrAtS));
     sb.append(String.format(Locale.ROOT, "  2-sigma coverage        %.1f %% overall%n", 100 * coverage()));
     for (Upset u : upsets) {
       sb.append(String.format(Locale.ROOT, "    upset %5.0f-%5.0f s   %.1f %% of %d frames%n", u.startS, u.endS, 100 * u.coverage(), u.frames));
@@ -376,8 +377,9 @@ public final class TwinScore {
     if (!tteCandidates.isEmpty()) {
       sb.append(String.format(Locale.ROOT,
           "  time-to-exhaust (truth 60-600 s, flows held until then): %.1f %% of %d frames within 10 %%, worst %.0f %%,"
-              + " truth within its ±2σ in %.1f %% (%d frames with the flows still moving not scored)%n",
-          100 * exhaustWithin10Pct(), tteScored, 100 * tteWorstRel, 100 * exhaustInside2Sd(), tteCandidates.size() - tteScored));
+              + " median error %+.0f %%, truth within its ±2σ in %.1f %% (%d frames with the flows still moving not scored)%n",
+          100 * exhaustWithin10Pct(), tteScored, 100 * tteWorstRel, 100 * exhaustMedianSignedRelError(), 100 * exhaustInside2Sd(),
+          tteCandidates.size() - tteScored));
     }
     return sb.toString();
   }
