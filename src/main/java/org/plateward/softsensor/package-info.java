@@ -158,7 +158,10 @@
  *       with calibrated meters 36 % (median −28 to −4 %).</li>
  *   <li>Tried and not taken: 90 and 100 cells (one recording improved, the seeds did not: see
  *       the reactor-model section of DEVELOPERS.md), a start from a minute's mean inputs
- *       instead of one frame's (the start's offset is the heat-loss prior, not meter noise).</li>
+ *       instead of one frame's (the start's offset is the heat-loss prior, not meter noise),
+ *       and the plate-end thermocouples read at a 1.5 mm junction depth from the two end
+ *       cells (the 10 mm end cells read 0.8–0.95 K above the plant's 3 mm ones; the seeds'
+ *       RMSE did not improve).</li>
  * </ul>
  * An estimate that meets those two targets needs information the boundary signals do not
  * carry here: a thermocouple near the combustion front, or a different target (truth inside
