@@ -47,6 +47,11 @@ public record Scenario(
     return new Scenario(name, newSeed, start, durationS, samplePeriodS, truth, sensors, events);
   }
 
+  /** The same scenario with other sensor models (for example without systematic errors). */
+  public Scenario withSensors(SensorSuite s) {
+    return new Scenario(name, seed, start, durationS, samplePeriodS, truth, s, events);
+  }
+
   public Scenario withTruth(TruthSettings t) {
     return new Scenario(name, seed, start, durationS, samplePeriodS, t, sensors, events);
   }

@@ -47,7 +47,7 @@ public final class ExhaustForecast {
   private double[][] jRef;
   private double[] slopeRef;
   /** Solvers of I − hJ·diag(ratio) per step length. */
-  private final java.util.Map<Double, ColumnScaledSolver> factors = new java.util.HashMap<>();
+  private final java.util.Map<Double, ColumnScaledSolver> solvers = new java.util.HashMap<>();
   private int lastCell = -1;
 
   public ExhaustForecast(PlateReactorModel model) {
@@ -95,7 +95,7 @@ public final class ExhaustForecast {
     for (int r = 0; r < n; r++) {
       jRef[r] = dfde[r].clone();
     }
-    factors.clear();
+    solvers.clear();
     slopeRef = new double[n];
     for (int j = 0; j < n; j++) {
       slopeRef[j] = builtSlopesKPerJ == null ? slope(e0[j]) : builtSlopesKPerJ[j];
@@ -112,19 +112,19 @@ public final class ExhaustForecast {
    * Solves (I − hJ·diag(ratio(e))) d = rhs. One factorisation per step length (a step halved
    * from 10 s to 0.5 s tries six lengths), updated exactly for the columns whose ratio moved
    * since ({@link ColumnScaledSolver}), refactorised when too many moved. Factors reused
-   * within a 10 % tolerance of the ratios, as before, refactorised at every step of a melting
-   * cell: on the fuel surge that was 40 % of a replay's time at 100 cells.
+   * within 10 % of the ratios, as before, had to be rebuilt at every step of a melting cell:
+   * on the fuel surge that was 40 % of a replay's time at 100 cells.
    */
   private double[] solve(double[] e, double h, double[] rhs) {
     double[] ratio = new double[n];
     for (int j = 0; j < n; j++) {
       ratio[j] = slopeRef[j] > 0 ? slope(e[j]) / slopeRef[j] : 1.0;
     }
-    ColumnScaledSolver s = factors.get(h);
+    ColumnScaledSolver s = solvers.get(h);
     double[] d = s == null ? null : s.solve(ratio, rhs);
     if (d == null) {
       s = new ColumnScaledSolver(jRef, h, ratio);
-      factors.put(h, s);
+      solvers.put(h, s);
       d = s.solve(ratio, rhs);
     }
     return d;

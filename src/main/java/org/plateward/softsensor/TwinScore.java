@@ -36,7 +36,6 @@ public final class TwinScore {
   private long scored;
   private double sumSq;
   private double sumErr;
-  private final List<Double> tteSignedRel = new ArrayList<>();
   private double maxErr;
   private double maxErrAtS = Double.NaN;
   private double maxCellMeltErrAtS = Double.NaN;
@@ -60,6 +59,8 @@ public final class TwinScore {
   private long tteScored;
   private long tteWithin;
   private double tteWorstRel;
+  /** Signed relative error (estimate − truth) / truth of each scored frame that had a forecast. */
+  private final List<Double> tteSignedRel = new ArrayList<>();
 
   private double upsetEndS = Double.NaN;
   private Upset current;
@@ -227,10 +228,11 @@ public final class TwinScore {
       if (Double.isFinite(est) && sd > 0.0 && Math.abs(est - tte) <= 2.0 * sd) {
         tteInside2Sd++;
       }
-      double rel = Double.isFinite(est) ? Math.abs(est - tte) / tte : Double.POSITIVE_INFINITY;
+      double signed = (est - tte) / tte;
+      double rel = Double.isFinite(est) ? Math.abs(signed) : Double.POSITIVE_INFINITY;
       tteWorstRel = Math.max(tteWorstRel, rel);
       if (Double.isFinite(est)) {
-        tteSignedRel.add((est - tte) / tte);
+        tteSignedRel.add(signed);
       }
       if (rel <= 0.1) {
         tteWithin++;

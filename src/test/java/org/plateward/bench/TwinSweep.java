@@ -20,8 +20,9 @@ import org.plateward.softsensor.TwinScore;
  * Twin experiments on every committed recording with tuning overrides, for studying the
  * estimator (not a test): {@code -Dss.<component>=value} overrides a {@link SoftSensorSettings}
  * component and {@code -Dfs.<component>=value} a {@link FilterSettings} one (numbers and
- * booleans; arrays as comma lists), {@code -Ddata=DIR} reads the recordings from another folder. Prints each recording's {@link TwinScore} summary. Arguments
- * name the recordings (default: all four).
+ * booleans; arrays as comma lists); {@code -Ddata=DIR} reads the recordings from another
+ * folder. Prints each recording's {@link TwinScore} summary. Arguments name the recordings
+ * (default: all four).
  */
 public final class TwinSweep {
   private TwinSweep() {}

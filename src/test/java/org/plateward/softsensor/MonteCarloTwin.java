@@ -44,12 +44,17 @@ final class MonteCarloTwin {
 
   /** The ensemble's runs. */
   record Ensemble(List<Run> runs) {
+    /** Mean of one figure over the runs. */
+    double mean(java.util.function.ToDoubleFunction<Run> figure) {
+      return runs.stream().mapToDouble(figure).average().orElse(Double.NaN);
+    }
+
     double meanNees() {
-      return runs.stream().mapToDouble(Run::meanNees).average().orElse(Double.NaN);
+      return mean(Run::meanNees);
     }
 
     double meanCoverage() {
-      return runs.stream().mapToDouble(Run::coverage).average().orElse(Double.NaN);
+      return mean(Run::coverage);
     }
 
     /** 95 % band of the ensemble mean NEES, one χ²(1) sample per run. */
@@ -111,8 +116,7 @@ final class MonteCarloTwin {
     UnitSpec unit = UnitConfigLoader.load(Path.of(System.getProperty("config", "config/plateward.toml")));
     Scenario scenario = ScenarioLoader.load(Path.of(args[0]));
     if (Boolean.getBoolean("perfectMeters")) { // study: the same plant with calibrated meters
-      scenario = new Scenario(scenario.name(), scenario.seed(), scenario.start(), scenario.durationS(),
-          scenario.samplePeriodS(), scenario.truth(), scenario.sensors().withoutSystematicErrors(), scenario.events());
+      scenario = scenario.withSensors(scenario.sensors().withoutSystematicErrors());
     }
     int m = args.length > 1 ? Integer.parseInt(args[1]) : 8;
     Path dir = Files.createTempDirectory("plateward-mc");
@@ -127,9 +131,7 @@ final class MonteCarloTwin {
     System.out.printf(Locale.ROOT, "%s, %d seeds: ensemble mean NEES %.2f, 95%% band [%.2f, %.2f]; mean 2-sigma coverage %.1f %%%n",
         scenario.name(), m, e.meanNees(), band[0], band[1], 100 * e.meanCoverage());
     System.out.printf(Locale.ROOT, "  mean peak RMSE %.2f K, mean bias %+.2f K; max-cell melt error mean %.2f, within 0.2 in %d of %d seeds%n",
-        e.runs().stream().mapToDouble(Run::peakRmseK).average().orElse(Double.NaN),
-        e.runs().stream().mapToDouble(Run::peakBiasK).average().orElse(Double.NaN),
-        e.runs().stream().mapToDouble(Run::maxCellMeltError).average().orElse(Double.NaN),
+        e.mean(Run::peakRmseK), e.mean(Run::peakBiasK), e.mean(Run::maxCellMeltError),
         e.runs().stream().filter(r -> r.maxCellMeltError() <= 0.2).count(), m);
     Files.deleteIfExists(dir);
   }
